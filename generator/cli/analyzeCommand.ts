@@ -1,0 +1,59 @@
+// `analyze <shape.json>`: solves one shape and reports its figures, readable or as one JSON object.
+import { parseShape, solveShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { DEG_PER_RAD } from "../units.js";
+import { readInputFile } from "./errors.js";
+import { complexText, fixed } from "./format.js";
+
+export interface AnalyzeOptions {
+  json?: boolean;
+  segmentsPerWavelength?: number;
+}
+
+/** The figures every analysis reports (the JSON contract of `analyze --json`). */
+export function solutionSummary(solution: Solution) {
+  return {
+    solverVersion: SOLVER_VERSION,
+    frequencyHz: solution.frequencyHz,
+    unknowns: solution.unknowns,
+    segments: solution.segments,
+    inputImpedanceOhm: solution.inputImpedanceOhm,
+    peakGainDbi: solution.peakGainDbi,
+    peakDirectivityDbi: solution.peakDirectivityDbi,
+    radiationEfficiency: solution.radiationEfficiency,
+    peakDirection: {
+      thetaDeg: solution.peakDirectionRad.theta * DEG_PER_RAD,
+      phiDeg: solution.peakDirectionRad.phi * DEG_PER_RAD,
+    },
+    energyBalanceError: solution.energyBalanceError,
+    warnings: solution.warnings,
+  };
+}
+
+export type SolutionSummary = ReturnType<typeof solutionSummary>;
+
+export function summaryText(label: string, s: SolutionSummary): string {
+  const lines = [
+    `${label}`,
+    `  frequency            ${fixed(s.frequencyHz / 1e6, 4)} MHz`,
+    `  unknowns / segments  ${s.unknowns} / ${s.segments}`,
+    `  input impedance      ${complexText(s.inputImpedanceOhm, 2)}`,
+    `  peak gain            ${fixed(s.peakGainDbi, 2)} dBi`,
+    `  peak directivity     ${fixed(s.peakDirectivityDbi, 2)} dBi`,
+    `  efficiency           ${fixed(100 * s.radiationEfficiency, 3)} %`,
+    `  peak direction       θ ${fixed(s.peakDirection.thetaDeg, 1)}°, φ ${fixed(s.peakDirection.phiDeg, 1)}° (θ from +z, φ from +x toward +y)`,
+  ];
+  if (s.energyBalanceError !== null) lines.push(`  energy balance error ${s.energyBalanceError.toExponential(2)} (pattern integral vs. radiated power)`);
+  for (const w of s.warnings) lines.push(`  warning: ${w}`);
+  return lines.join("\n");
+}
+
+export async function loadShape(path: string): Promise<Shape> {
+  return parseShape(await readInputFile(path, "analyze"), path);
+}
+
+export async function analyzeCommand(path: string, options: AnalyzeOptions): Promise<void> {
+  const shape = await loadShape(path);
+  const solution = solveShape(shape, { segmentsPerWavelength: options.segmentsPerWavelength, energyBalance: true });
+  const summary = solutionSummary(solution);
+  process.stdout.write(options.json ? `${JSON.stringify(summary)}\n` : `${summaryText(shape.name ?? path, summary)}\n`);
+}

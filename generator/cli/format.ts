@@ -1,0 +1,15 @@
+// Small number formatting helpers shared by the readable reports.
+import { DEG_PER_RAD } from "../units.js";
+
+export const fixed = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : String(v));
+export const deg = (rad: number): number => round(rad * DEG_PER_RAD, 2);
+export const round = (v: number, digits: number): number => {
+  const f = 10 ** digits;
+  return Math.round(v * f) / f;
+};
+export const complexText = (z: { re: number; im: number }, digits = 1): string =>
+  `${fixed(z.re, digits)} ${z.im < 0 ? "−" : "+"} j${fixed(Math.abs(z.im), digits)} Ω`;
+export const table = (rows: string[][]): string => {
+  const widths = rows[0].map((_, c) => Math.max(...rows.map((r) => (r[c] ?? "").length)));
+  return rows.map((r) => r.map((cell, c) => cell.padEnd(widths[c])).join("  ").trimEnd()).join("\n");
+};

@@ -1,0 +1,122 @@
+// One solve of a shape at its frequency: mesh → impedance matrix (+ conductor loss) → currents for
+// a 1 V delta-gap feed → input impedance, powers, peak gain, directivity and efficiency.
+//   Z_in = V / I_feed,  P_in = ½ Re(V I*),  P_loss = ½ Σ_s R'_s ∫|I(l)|² dl,  P_rad = P_in − P_loss,
+//   G = 4πU_max / P_in,  D = 4πU_max / P_rad,  e = P_rad / P_in   (IEEE Std 145-2013 definitions).
+// Energy balance: |∫U dΩ − P_rad| / P_rad, a check that the matrix and the far field agree.
+import { CONDUCTIVITY_S_PER_M, toDb, wavenumberRadPerM } from "../units.js";
+import { solveComplex } from "./complexLu.js";
+import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
+import { checkMesh } from "./geometryChecks.js";
+import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
+import { createKernelRules, type KernelRules } from "./kernel.js";
+import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
+import { DEFAULT_PEAK_OPTIONS, findPeak, integratePattern, patternPointsFor, type PeakOptions } from "./pattern.js";
+import type { Conductor, Shape } from "./shapeFile.js";
+
+export const SOLVER_VERSION = "bentwire-em-1";
+
+export interface SolveOptions {
+  segmentsPerWavelength?: number;
+  energyBalance?: boolean;
+  peak?: PeakOptions;
+  rules?: KernelRules;
+}
+
+export interface Solution {
+  frequencyHz: number;
+  unknowns: number;
+  segments: number;
+  mesh: Mesh;
+  currentRe: Float64Array;
+  currentIm: Float64Array;
+  inputImpedanceOhm: { re: number; im: number };
+  inputPowerW: number;
+  lossPowerW: number;
+  radiatedPowerW: number;
+  farField: FarFieldPlan;
+  peakGainDbi: number;
+  peakDirectivityDbi: number;
+  radiationEfficiency: number;
+  peakDirectionRad: { theta: number; phi: number };
+  energyBalanceError: number | null;
+  warnings: string[];
+}
+
+export function conductivityOf(conductor: Conductor): number {
+  if (conductor === "perfect") return Infinity;
+  if (typeof conductor === "string") return CONDUCTIVITY_S_PER_M[conductor];
+  return conductor.conductivitySPerM;
+}
+
+export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
+  const mesh = buildMesh(shape, options.segmentsPerWavelength);
+  const warnings = checkMesh(mesh);
+  const k = wavenumberRadPerM(shape.frequencyHz);
+  const z = fillImpedance(mesh, k, options.rules ?? createKernelRules());
+  const sigma = conductivityOf(shape.conductor);
+  const rPerM = new Float64Array(mesh.segmentCount);
+  if (Number.isFinite(sigma)) {
+    for (let s = 0; s < mesh.segmentCount; s++) rPerM[s] = surfaceResistancePerM(shape.frequencyHz, mesh.radiusM[s], sigma);
+    addConductorLoss(z, mesh, rPerM);
+  }
+  const bRe = new Float64Array(mesh.unknowns);
+  const bIm = new Float64Array(mesh.unknowns);
+  bRe[mesh.feedBasis] = 1; // 1 V delta gap
+  const { re, im } = solveComplex(z, bRe, bIm);
+  const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
+  const i2 = ir * ir + ii * ii;
+  const inputImpedanceOhm = { re: ir / i2, im: -ii / i2 };
+  const inputPowerW = 0.5 * ir; // ½ Re(V I*) with V = 1
+  const lossPowerW = conductorLossW(mesh, re, im, rPerM);
+  const radiatedPowerW = inputPowerW - lossPowerW;
+  const farField = createFarFieldPlan(mesh, re, im, k);
+  const peak = findPeak(farField, options.peak ?? DEFAULT_PEAK_OPTIONS);
+  let energyBalanceError: number | null = null;
+  if (options.energyBalance) {
+    const pattern = integratePattern(farField, patternPointsFor(k, maxRadiusM(mesh)));
+    energyBalanceError = Math.abs(pattern - radiatedPowerW) / radiatedPowerW;
+  }
+  return {
+    frequencyHz: shape.frequencyHz,
+    unknowns: mesh.unknowns,
+    segments: mesh.segmentCount,
+    mesh,
+    currentRe: re,
+    currentIm: im,
+    inputImpedanceOhm,
+    inputPowerW,
+    lossPowerW,
+    radiatedPowerW,
+    farField,
+    peakGainDbi: toDb((4 * Math.PI * peak.intensityWPerSr) / inputPowerW),
+    peakDirectivityDbi: toDb((4 * Math.PI * peak.intensityWPerSr) / radiatedPowerW),
+    radiationEfficiency: radiatedPowerW / inputPowerW,
+    peakDirectionRad: { theta: peak.thetaRad, phi: peak.phiRad },
+    energyBalanceError,
+    warnings,
+  };
+}
+
+/** ½ Σ_s R'_s ∫_0^L |I1(1−t) + I2 t|² dl = ½ Σ R'_s L (|I1|² + Re(I1 I2*) + |I2|²)/3. */
+function conductorLossW(mesh: Mesh, re: Float64Array, im: Float64Array, rPerM: Float64Array): number {
+  let p = 0;
+  for (let s = 0; s < mesh.segmentCount; s++) {
+    if (rPerM[s] === 0) continue;
+    const [r1, i1, r2, i2] = segmentEndCurrents(mesh, s, re, im);
+    p += (rPerM[s] * mesh.lengthM[s] * (r1 * r1 + i1 * i1 + r1 * r2 + i1 * i2 + r2 * r2 + i2 * i2)) / 3;
+  }
+  return 0.5 * p;
+}
+
+/** Largest distance of any segment end from the origin (sets the pattern's angular detail). */
+function maxRadiusM(mesh: Mesh): number {
+  let r = 0;
+  for (let s = 0; s < mesh.segmentCount; s++) {
+    for (const t of [0, 1]) {
+      let d2 = 0;
+      for (let c = 0; c < 3; c++) d2 += (mesh.start[3 * s + c] + t * mesh.dir[3 * s + c] * mesh.lengthM[s]) ** 2;
+      r = Math.max(r, Math.sqrt(d2));
+    }
+  }
+  return r;
+}
