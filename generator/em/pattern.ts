@@ -1,6 +1,6 @@
 // Searches the whole sphere for the direction of peak radiation intensity and integrates the
 // pattern. Peak: a coarse grid (step h0 in θ and φ), the best few local maxima refined by a compass
-// search in (θ, φ) that halves its step until h < hMin (Kolda, Lewis & Torczon, "Optimization by
+// search on the tangent plane that halves its step until h < hMin (Kolda, Lewis & Torczon, "Optimization by
 // direct search", SIAM Review 45, 2003, §3). Integral: P = ∫U dΩ = ∫_{−1}^{1} d(cosθ) ∫_0^{2π} U dφ,
 // Gauss–Legendre in cosθ and the trapezoid rule in φ (exact for trigonometric polynomials of
 // degree below the point count). Shapes in the x–y plane are mirror-symmetric in |E| about it,
@@ -65,29 +65,44 @@ export function findPeak(plan: FarFieldPlan, options: PeakOptions = DEFAULT_PEAK
   return best;
 }
 
+/**
+ * Compass search on the tangent plane at the start direction d0: d(u, v) = normalise(d0 + u·e1 + v·e2),
+ * so the poles are ordinary points. Each step size allows a few moves before it halves, which bounds
+ * the work on ridges.
+ */
 function refine(
   plan: FarFieldPlan, theta0: number, phi0: number, u0: number, step0: number,
   options: PeakOptions, scratch: Float64Array,
 ): Peak {
-  let theta = theta0, phi = phi0, value = u0, step = step0;
+  const d0 = [Math.sin(theta0) * Math.cos(phi0), Math.sin(theta0) * Math.sin(phi0), Math.cos(theta0)];
+  const e1 = [Math.cos(theta0) * Math.cos(phi0), Math.cos(theta0) * Math.sin(phi0), -Math.sin(theta0)]; // θ̂
+  const e2 = [-Math.sin(phi0), Math.cos(phi0), 0]; // φ̂
+  const angles = (u: number, v: number): [number, number] => {
+    const x = d0[0] + u * e1[0] + v * e2[0];
+    const y = d0[1] + u * e1[1] + v * e2[1];
+    let z = d0[2] + u * e1[2] + v * e2[2];
+    if (plan.planarXy && z < 0) z = -z; // |E| mirrors about the plane of the shape
+    const theta = Math.atan2(Math.hypot(x, y), z);
+    const phi = Math.hypot(x, y) < 1e-12 ? 0 : (Math.atan2(y, x) + 2 * Math.PI) % (2 * Math.PI);
+    return [theta, phi];
+  };
+  let u = 0, v = 0, value = u0, step = step0;
   const stop = options.refineToDeg * RAD_PER_DEG;
-  const thetaMax = plan.planarXy ? Math.PI / 2 : Math.PI;
+  const moves: [number, number][] = [[1, 0], [-1, 0], [0, 1], [0, -1]];
   while (step >= stop) {
-    let moved = false;
-    for (const [dt, dp] of [[step, 0], [-step, 0], [0, step], [0, -step]]) {
-      let t = theta + dt;
-      let p = phi + dp;
-      if (t < 0) { t = -t; p += Math.PI; }
-      if (t > thetaMax) t = 2 * thetaMax - t;
-      p = ((p % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
-      const v = intensityAt(plan, t, p, scratch);
-      if (v > value) { theta = t; phi = p; value = v; moved = true; break; }
+    for (let moved = 0, tries = 0; tries < 6; tries++) {
+      let better = false;
+      for (const [du, dv] of moves) {
+        const [t, p] = angles(u + du * step, v + dv * step);
+        const val = intensityAt(plan, t, p, scratch);
+        if (val > value) { u += du * step; v += dv * step; value = val; better = true; moved++; break; }
+      }
+      if (!better) break;
     }
-    if (!moved) step /= 2;
+    step /= 2;
   }
-  // at a pole φ means nothing: report 0
-  if (Math.sin(theta) < 1e-9) phi = 0;
-  return { thetaRad: theta, phiRad: phi, intensityWPerSr: value };
+  const [theta, phi] = angles(u, v);
+  return { thetaRad: theta, phiRad: Math.sin(theta) < 1e-9 ? 0 : phi, intensityWPerSr: value };
 }
 
 /** ∫U dΩ over the whole sphere (W), with nTheta Gauss points in cosθ and 2·nTheta in φ. */

@@ -48,7 +48,19 @@ export function conductivityOf(conductor: Conductor): number {
   return conductor.conductivitySPerM;
 }
 
-export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
+export interface FeedSolution {
+  mesh: Mesh;
+  kRadPerM: number;
+  currentRe: Float64Array;
+  currentIm: Float64Array;
+  inputImpedanceOhm: { re: number; im: number };
+  inputPowerW: number;
+  lossPowerW: number;
+  warnings: string[];
+}
+
+/** Currents and input impedance only: what a band sweep needs at frequencies off the design one. */
+export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolution {
   const mesh = buildMesh(shape, options.segmentsPerWavelength);
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
@@ -65,10 +77,22 @@ export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
   const { re, im } = solveComplex(z, bRe, bIm);
   const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
   const i2 = ir * ir + ii * ii;
-  const inputImpedanceOhm = { re: ir / i2, im: -ii / i2 };
-  const inputPowerW = 0.5 * ir; // ½ Re(V I*) with V = 1
-  const lossPowerW = conductorLossW(mesh, re, im, rPerM);
-  const radiatedPowerW = inputPowerW - lossPowerW;
+  return {
+    mesh,
+    kRadPerM: k,
+    currentRe: re,
+    currentIm: im,
+    inputImpedanceOhm: { re: ir / i2, im: -ii / i2 },
+    inputPowerW: 0.5 * ir, // ½ Re(V I*) with V = 1
+    lossPowerW: conductorLossW(mesh, re, im, rPerM),
+    warnings,
+  };
+}
+
+export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
+  const feed = solveFeed(shape, options);
+  const { mesh, currentRe: re, currentIm: im, inputPowerW, kRadPerM: k } = feed;
+  const radiatedPowerW = inputPowerW - feed.lossPowerW;
   const farField = createFarFieldPlan(mesh, re, im, k);
   const peak = findPeak(farField, options.peak ?? DEFAULT_PEAK_OPTIONS);
   let energyBalanceError: number | null = null;
@@ -83,9 +107,9 @@ export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
     mesh,
     currentRe: re,
     currentIm: im,
-    inputImpedanceOhm,
+    inputImpedanceOhm: feed.inputImpedanceOhm,
     inputPowerW,
-    lossPowerW,
+    lossPowerW: feed.lossPowerW,
     radiatedPowerW,
     farField,
     peakGainDbi: toDb((4 * Math.PI * peak.intensityWPerSr) / inputPowerW),
@@ -93,7 +117,7 @@ export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
     radiationEfficiency: radiatedPowerW / inputPowerW,
     peakDirectionRad: { theta: peak.thetaRad, phi: peak.phiRad },
     energyBalanceError,
-    warnings,
+    warnings: feed.warnings,
   };
 }
 
