@@ -1,5 +1,6 @@
 // `npm run bench [-- --json] [-- --only solver|optimizer|analysis|catalog]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
+import { benchOptimizer } from "./optimizer.js";
 import { benchSolver } from "./solver.js";
 
 const args = process.argv.slice(2);
@@ -19,6 +20,18 @@ if (wants("solver")) {
     console.log("unknowns  fill     solve    peak     total    | real 2N×2N LU (ml-matrix)");
     for (const c of cases) {
       console.log(`${String(c.unknowns).padEnd(9)} ${ms(c.fillMs).padEnd(8)} ${ms(c.solveMs).padEnd(8)} ${ms(c.peakMs).padEnd(8)} ${ms(c.totalMs).padEnd(8)} | ${ms(c.realFormSolveMs)}`);
+    }
+  }
+}
+
+if (wants("optimizer")) {
+  const cases = benchOptimizer();
+  out.optimizer = cases;
+  if (!json) {
+    console.log("\noptimizer (1.5λ wire, lossless, 5 seeds): evaluations and seconds to come within 0.05 dB of the best");
+    console.log("K  best dBi  evals median  evals worst  s median  s worst  total evals (median)");
+    for (const c of cases) {
+      console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${c.medianTotalEvaluations}`);
     }
   }
 }

@@ -3,7 +3,9 @@
 import { Command, CommanderError } from "commander";
 import { analyzeCommand } from "./analyzeCommand.js";
 import { runReportingErrors } from "./errors.js";
-import { wholeNumber } from "./options.js";
+import { designCommand } from "./designCommand.js";
+import { bandMhz, oneOf, positiveNumber, wholeNumber } from "./options.js";
+import { VARIANTS } from "../design/request.js";
 
 const program = new Command("bentwire")
   .description("Bent-wire antenna designs: solve, optimize, analyze and catalog")
@@ -17,6 +19,21 @@ program
   .option("--json", "print one JSON object instead of the readable report")
   .option("--segments-per-wavelength <n>", "segments per wavelength (default 25)", wholeNumber("--segments-per-wavelength", 5, 400))
   .action((shape: string, opts) => analyzeCommand(shape, opts));
+
+program
+  .command("design")
+  .description("find the bent-arm shape with the most gain for a frequency, wire length and pieces per arm")
+  .option("--freq-mhz <F>", "design frequency in MHz", positiveNumber("--freq-mhz"))
+  .option("--length-wl <L>", "wire length, tip to tip, in wavelengths", positiveNumber("--length-wl"))
+  .option("--pieces <K>", "straight pieces per arm (1 = straight wire or V)", wholeNumber("--pieces", 1, 8))
+  .option("--wire-diameter-mm <D>", "wire diameter in mm", positiveNumber("--wire-diameter-mm"), 2)
+  .option("--conductor <name>", "perfect, copper or aluminium", oneOf("--conductor", ["perfect", "copper", "aluminium"] as const), "copper")
+  .option("--variant <name>", `${VARIANTS.join(" or ")}`, oneOf("--variant", VARIANTS), "max-gain")
+  .option("--band-mhz <LO:HI>", "band edges in MHz (default ±2 % around the frequency)", bandMhz("--band-mhz"))
+  .option("--seed <S>", "random seed", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
+  .option("--json", "print one JSON object")
+  .option("--out <file>", "write the winning shape as a shape file")
+  .action((opts) => designCommand(opts));
 
 await runReportingErrors(async () => {
   try {

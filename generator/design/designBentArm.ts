@@ -1,0 +1,104 @@
+// Designs one bent-arm antenna: IPOP-CMA-ES over the box-normalised parameters (z = (x − lo)/(hi − lo)
+// ∈ [0,1]^n, σ0 = 0.25), then a Nelder–Mead polish from the best point (step 0.02 in z). Both are
+// seeded; the search never throws for a numerical outcome: a design that meets no constraint is
+// returned with status "infeasible" and the reasons. For direct-feed designs the search checks SWR
+// at 5 band frequencies against 97.5 % of the limit, the polish at all 11 against the limit itself.
+// `start` skips the search and only polishes (a shape found in wavelength units, re-used per band).
+import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
+import { parameterBounds } from "../shapes/constraints.js";
+import { wavelengthM } from "../units.js";
+import { checkFrequencies, evaluate, shapeOf, specOf, type Evaluation } from "./objective.js";
+import { limitsOf, type DesignRequest } from "./request.js";
+
+export const SWEEP_POINTS_IN_BAND = 11;
+const SEARCH_SWR_POINTS = 5;
+
+export interface DesignOutcome {
+  status: "ok" | "infeasible";
+  message: string;
+  x: number[];
+  evaluation: Evaluation;
+  evaluations: number;
+  searchEvaluations: number;
+  stopReasons: StopReason[];
+  history: HistoryEntry[];
+}
+
+export interface DesignProgress {
+  evaluations: number;
+  bestGainDbi: number | null;
+}
+
+export function designBentArm(
+  r: DesignRequest,
+  options: { start?: number[]; onProgress?: (p: DesignProgress) => void } = {},
+): DesignOutcome {
+  const n = 2 * r.piecesPerArm - 1;
+  const { lower, upper } = parameterBounds(specOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
+  const toX = (z: readonly number[]) => z.map((v, i) => lower[i] + v * (upper[i] - lower[i]));
+  const toZ = (x: readonly number[]) => x.map((v, i) => (upper[i] > lower[i] ? (v - lower[i]) / (upper[i] - lower[i]) : 0));
+  const searchFrequencies = checkFrequencies(r, SEARCH_SWR_POINTS);
+  const polishFrequencies = checkFrequencies(r, SWEEP_POINTS_IN_BAND);
+  let evaluations = 0;
+  let bestGain: number | null = null;
+  const score = (z: readonly number[], freqs: number[], limit: number) => {
+    const e = evaluate(toX(z), r, freqs, limit);
+    evaluations++;
+    const improved = e.score < 0 && (bestGain === null || -e.score > bestGain);
+    if (improved) bestGain = -e.score;
+    if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain });
+    return e.score;
+  };
+
+  let z0 = options.start ? toZ(options.start) : new Array(n).fill(0.5);
+  let stopReasons: StopReason[] = [];
+  let history: HistoryEntry[] = [];
+  let searchEvaluations = 0;
+  if (!options.start) {
+    const ipop = createIpop({
+      x0: z0,
+      sigma0: 0.25,
+      lowerBounds: new Array(n).fill(0),
+      upperBounds: new Array(n).fill(1),
+      seed: r.seed,
+      maxEvaluations: r.maxEvaluations ?? 500 * n + 500,
+      maxRestarts: 4,
+      tolFun: 1e-4,
+      tolX: 1e-4,
+    });
+    while (ipop.stop().length === 0) {
+      const zs = ipop.ask();
+      ipop.tell(zs, zs.map((z) => score(z, searchFrequencies, r.swrLimit * 0.975)));
+    }
+    const result = ipop.result();
+    z0 = result.x;
+    stopReasons = result.stopReasons;
+    history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
+    searchEvaluations = result.evaluations;
+  }
+  const polish = nelderMead((z) => score(z, polishFrequencies, r.swrLimit), {
+    x0: z0.map((v) => Math.min(1, Math.max(0, v))),
+    initialStep: options.start ? 0.01 : 0.02,
+    lowerBounds: new Array(n).fill(0),
+    upperBounds: new Array(n).fill(1),
+    maxEvaluations: 60 * n,
+    tolX: 1e-5,
+    tolFun: 1e-5,
+  });
+  history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + searchEvaluations, bestF: h.bestF })));
+  const x = toX(polish.x);
+  const evaluation = evaluate(x, r, polishFrequencies, r.swrLimit);
+  const feasible = evaluation.score < 0;
+  return {
+    status: feasible ? "ok" : "infeasible",
+    message: feasible ? "constraints met" : `no shape met every constraint: ${evaluation.reasons.join("; ")}`,
+    x,
+    evaluation,
+    evaluations,
+    searchEvaluations,
+    stopReasons: [...stopReasons, ...polish.stopReasons],
+    history,
+  };
+}
+
+export { shapeOf };

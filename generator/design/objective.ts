@@ -1,0 +1,71 @@
+// Scores one bent-arm parameter vector for the optimizer (smaller is better):
+//   geometry infeasible      → 1000 + violation          (no solve)
+//   direct-feed, SWR too high → 100 + (SWR_max − limit)  (Deb 2000: any feasible beats any infeasible)
+//   feasible                  → −G_peak (dBi)
+// `max-gain` maximises peak gain in any direction at the design frequency. `direct-feed` does the
+// same subject to SWR ≤ limit against the line impedance at every checked frequency of the band,
+// so the shape needs no matching network.
+import { solveFeed, solveShape, type Shape } from "../em/index.js";
+import { InputError } from "../errors.js";
+import { toShape, unpack, type BentArmSpec } from "../shapes/bentArm.js";
+import { constraintViolation } from "../shapes/constraints.js";
+import { wavelengthM } from "../units.js";
+import { bandOf, limitsOf, type DesignRequest } from "./request.js";
+
+export const GEOMETRY_PENALTY = 1000;
+export const SWR_PENALTY = 100;
+
+export interface Evaluation {
+  score: number;
+  gainDbi: number | null;
+  maxSwr: number | null;
+  reasons: string[];
+}
+
+export function specOf(r: DesignRequest): BentArmSpec {
+  return { piecesPerArm: r.piecesPerArm, wireLengthM: r.lengthWl * wavelengthM(r.frequencyHz) };
+}
+
+export function shapeOf(x: readonly number[], r: DesignRequest, frequencyHz = r.frequencyHz): Shape {
+  return toShape(unpack(x, r.piecesPerArm), specOf(r), {
+    frequencyHz,
+    wireRadiusM: r.wireDiameterM / 2,
+    conductor: r.conductor,
+    segmentsPerWavelength: r.segmentsPerWavelength,
+  });
+}
+
+export function swrOf(z: { re: number; im: number }, z0: number): number {
+  const dr = z.re + z0, nr = z.re - z0;
+  const g = Math.sqrt((nr * nr + z.im * z.im) / (dr * dr + z.im * z.im)); // |Γ| = |Z − Z0| / |Z + Z0|
+  return g >= 1 ? Infinity : (1 + g) / (1 - g);
+}
+
+/** Frequencies at which a direct-feed design's SWR is checked: `count` evenly across the band. */
+export function checkFrequencies(r: DesignRequest, count: number): number[] {
+  const [lo, hi] = bandOf(r);
+  return Array.from({ length: count }, (_, i) => lo + ((hi - lo) * i) / (count - 1));
+}
+
+export function evaluate(x: readonly number[], r: DesignRequest, swrFrequenciesHz: number[], swrLimit: number): Evaluation {
+  const violation = constraintViolation(unpack(x, r.piecesPerArm), specOf(r), limitsOf(r), wavelengthM(r.frequencyHz), r.wireDiameterM / 2);
+  if (violation.total > 0) return { score: GEOMETRY_PENALTY + violation.total, gainDbi: null, maxSwr: null, reasons: violation.reasons };
+  try {
+    const solution = solveShape(shapeOf(x, r));
+    const gainDbi = solution.peakGainDbi;
+    if (r.variant === "max-gain") return { score: -gainDbi, gainDbi, maxSwr: null, reasons: [] };
+    let maxSwr = 0;
+    for (const f of swrFrequenciesHz) {
+      const z = f === r.frequencyHz ? solution.inputImpedanceOhm : solveFeed(shapeOf(x, r, f)).inputImpedanceOhm;
+      maxSwr = Math.max(maxSwr, swrOf(z, r.lineImpedanceOhm));
+    }
+    if (maxSwr > swrLimit) {
+      const excess = Number.isFinite(maxSwr) ? maxSwr - swrLimit : 1e3;
+      return { score: SWR_PENALTY + excess, gainDbi, maxSwr, reasons: [`SWR reaches ${maxSwr.toFixed(2)} in the band, above ${swrLimit}`] };
+    }
+    return { score: -gainDbi, gainDbi, maxSwr, reasons: [] };
+  } catch (err) {
+    if (err instanceof InputError) return { score: GEOMETRY_PENALTY + 1, gainDbi: null, maxSwr: null, reasons: [err.message] };
+    throw err;
+  }
+}

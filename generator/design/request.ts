@@ -1,0 +1,52 @@
+// What a design asks for, validated once with zod so the CLI, the catalog and tests share the rules.
+import { z } from "zod";
+import { conductorSchema } from "../em/shapeFile.js";
+import { InputError } from "../errors.js";
+import { DEFAULT_LIMITS, type BentArmLimits } from "../shapes/constraints.js";
+
+export const VARIANTS = ["max-gain", "direct-feed"] as const;
+export type Variant = (typeof VARIANTS)[number];
+
+const positive = (what: string) =>
+  z.number({ error: `${what} must be a number` }).refine((v) => Number.isFinite(v) && v > 0, `${what} must be a positive number`);
+
+export const designRequestSchema = z
+  .strictObject({
+    frequencyHz: positive("frequencyHz"),
+    lengthWl: positive("lengthWl").refine((v) => v >= 0.2 && v <= 6, "lengthWl must lie between 0.2 and 6 wavelengths"),
+    piecesPerArm: z.number().int("piecesPerArm must be a whole number").min(1, "piecesPerArm must be at least 1").max(8, "piecesPerArm must be at most 8"),
+    wireDiameterM: positive("wireDiameterM"),
+    conductor: conductorSchema.default("copper"),
+    variant: z.enum(VARIANTS, { error: `variant must be one of ${VARIANTS.join(", ")}` }).default("max-gain"),
+    bandHz: z.tuple([positive("bandHz[0]"), positive("bandHz[1]")]).optional(),
+    lineImpedanceOhm: positive("lineImpedanceOhm").default(50),
+    swrLimit: positive("swrLimit").refine((v) => v > 1, "swrLimit must exceed 1").default(2),
+    seed: z.number().int("seed must be a whole number").min(0, "seed must be 0 or more").default(1),
+    segmentsPerWavelength: positive("segmentsPerWavelength").optional(),
+    maxEvaluations: z.number().int().positive().optional(),
+  })
+  .superRefine((r, ctx) => {
+    if (r.bandHz) {
+      const [lo, hi] = r.bandHz;
+      if (!(lo < hi)) ctx.addIssue({ code: "custom", path: ["bandHz"], message: `band low edge must be below its high edge (got ${lo} ≥ ${hi})` });
+      else if (r.frequencyHz < lo || r.frequencyHz > hi) {
+        ctx.addIssue({ code: "custom", path: ["bandHz"], message: `band ${lo / 1e6}–${hi / 1e6} MHz must contain the design frequency ${r.frequencyHz / 1e6} MHz` });
+      }
+    }
+  });
+
+export type DesignRequest = z.output<typeof designRequestSchema> & { limits?: BentArmLimits };
+
+/** Default band when none is given: ±2 % around the design frequency. */
+export const bandOf = (r: DesignRequest): [number, number] => r.bandHz ?? [r.frequencyHz * 0.98, r.frequencyHz * 1.02];
+export const limitsOf = (r: DesignRequest): BentArmLimits => r.limits ?? DEFAULT_LIMITS;
+
+export function parseDesignRequest(raw: unknown, label = "design"): DesignRequest {
+  const result = designRequestSchema.safeParse(raw);
+  if (!result.success) {
+    const issue = result.error.issues[0];
+    const path = issue.path.length ? issue.path.join(".") : "(top level)";
+    throw new InputError(`${label}: ${path}: ${issue.message}`);
+  }
+  return result.data;
+}
