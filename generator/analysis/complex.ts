@@ -58,3 +58,10 @@ export function formatComplex(z: Complex): string {
   const sign = z.im < 0 || Object.is(z.im, -0) ? "-" : "+";
   return `${z.re}${sign}${Math.abs(z.im)}j`;
 }
+
+/** Throws one line unless value is a positive finite number. */
+export function requirePositiveFinite(name: string, value: number): void {
+  if (typeof value !== "number" || !Number.isFinite(value) || value <= 0) {
+    throw new Error(`${name} must be a positive finite number (got ${value})`);
+  }
+}

@@ -9,6 +9,7 @@
 // X < 0 → C = −1/(ωX); shunt B > 0 → C = B/ω, B < 0 → L = −1/(ωB).
 
 import { add, div, formatComplex, mul, requireFiniteComplex, type Complex } from "./complex.js";
+import { requirePositiveFinite } from "./complex.js";
 
 export type ComponentPosition = "series" | "shunt";
 
@@ -32,11 +33,6 @@ export interface LNetwork {
 /** Relative tolerance under which R_L is treated as equal to Z0. */
 const EQUAL_RESISTANCE_TOLERANCE = 1e-12;
 
-function requirePositiveFinite(name: string, value: number): void {
-  if (typeof value !== "number" || !Number.isFinite(value) || value <= 0) {
-    throw new Error(`${name} must be a positive finite number (got ${value})`);
-  }
-}
 
 function seriesComponent(reactanceOhm: number, omega: number): MatchingComponent | null {
   if (reactanceOhm > 0) return { kind: "inductor", position: "series", inductanceH: reactanceOhm / omega };

@@ -6,9 +6,10 @@
 // dielectric ≈ 0.66, foam ≈ 0.82 — common practice; the caller supplies the real cable's figure).
 
 import { div, formatComplex, requireFiniteComplex, type Complex } from "./complex.js";
+import { requirePositiveFinite } from "./complex.js";
 import { swr } from "./swr.js";
+import { SPEED_OF_LIGHT_M_PER_S } from "../units.js";
 
-const SPEED_OF_LIGHT_M_PER_S = 299_792_458;
 
 export interface CoaxOption {
   impedanceOhm: number;
@@ -38,11 +39,6 @@ export interface QuarterWaveDesign {
   swrAtDesignFrequency: number;
 }
 
-function requirePositiveFinite(name: string, value: number): void {
-  if (typeof value !== "number" || !Number.isFinite(value) || value <= 0) {
-    throw new Error(`${name} must be a positive finite number (got ${value})`);
-  }
-}
 
 /** Input impedance of a lossless line (lineImpedanceOhm, electricalLengthRad = βl) ending in zLoad. */
 export function lineInputImpedance(

@@ -4,12 +4,8 @@
 // The SWR span is read from a sampled sweep by linear interpolation between samples.
 
 import { abs, add, div, formatComplex, requireFiniteComplex, sub, type Complex } from "./complex.js";
+import { requirePositiveFinite } from "./complex.js";
 
-function requirePositiveFinite(name: string, value: number): void {
-  if (typeof value !== "number" || !Number.isFinite(value) || value <= 0) {
-    throw new Error(`${name} must be a positive finite number (got ${value})`);
-  }
-}
 
 /** Γ = (Z_L − Z0)/(Z_L + Z0). */
 export function reflectionCoefficient(zLoad: Complex, z0Ohm: number): Complex {

@@ -5,6 +5,7 @@
 // `max-gain` maximises peak gain in any direction at the design frequency. `direct-feed` does the
 // same subject to SWR ≤ limit against the line impedance at every checked frequency of the band,
 // so the shape needs no matching network.
+import { swr as swrOf } from "../analysis/swr.js";
 import { solveFeed, solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { toShape, unpack, type BentArmSpec } from "../shapes/bentArm.js";
@@ -35,11 +36,7 @@ export function shapeOf(x: readonly number[], r: DesignRequest, frequencyHz = r.
   });
 }
 
-export function swrOf(z: { re: number; im: number }, z0: number): number {
-  const dr = z.re + z0, nr = z.re - z0;
-  const g = Math.sqrt((nr * nr + z.im * z.im) / (dr * dr + z.im * z.im)); // |Γ| = |Z − Z0| / |Z + Z0|
-  return g >= 1 ? Infinity : (1 + g) / (1 - g);
-}
+export { swr as swrOf } from "../analysis/swr.js";
 
 /** Frequencies at which a direct-feed design's SWR is checked: `count` evenly across the band. */
 export function checkFrequencies(r: DesignRequest, count: number): number[] {
