@@ -1,5 +1,6 @@
 // `npm run bench [-- --json] [-- --only solver|optimizer|analysis|catalog]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
+import { benchAnalysis } from "./analysis.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchSolver } from "./solver.js";
 
@@ -34,6 +35,12 @@ if (wants("optimizer")) {
       console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${c.medianTotalEvaluations}`);
     }
   }
+}
+
+if (wants("analysis")) {
+  const a = benchAnalysis();
+  out.analysis = a;
+  if (!json) console.log(`\nanalysis of a 1.5λ K = 3 design (sweep, match, 64-sample tolerance, convergence): median ${a.medianMs.toFixed(0)} ms of ${a.runs}`);
 }
 
 if (json) console.log(JSON.stringify(out));

@@ -1,5 +1,7 @@
 // `analyze <shape.json>`: solves one shape and reports its figures, readable or as one JSON object.
+import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
 import { parseShape, solveShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { analysisText } from "./analysisText.js";
 import { DEG_PER_RAD } from "../units.js";
 import { readInputFile } from "./errors.js";
 import { complexText, fixed } from "./format.js";
@@ -7,6 +9,10 @@ import { complexText, fixed } from "./format.js";
 export interface AnalyzeOptions {
   json?: boolean;
   segmentsPerWavelength?: number;
+  bandMhz?: [number, number];
+  lineOhm: number;
+  toleranceSamples: number;
+  seed: number;
 }
 
 /** The figures every analysis reports (the JSON contract of `analyze --json`). */
@@ -52,8 +58,22 @@ export async function loadShape(path: string): Promise<Shape> {
 }
 
 export async function analyzeCommand(path: string, options: AnalyzeOptions): Promise<void> {
-  const shape = await loadShape(path);
-  const solution = solveShape(shape, { segmentsPerWavelength: options.segmentsPerWavelength, energyBalance: true });
-  const summary = solutionSummary(solution);
-  process.stdout.write(options.json ? `${JSON.stringify(summary)}\n` : `${summaryText(shape.name ?? path, summary)}\n`);
+  const loaded = await loadShape(path);
+  const shape = options.segmentsPerWavelength ? { ...loaded, segmentsPerWavelength: options.segmentsPerWavelength } : loaded;
+  const analysisOptions = options.bandMhz && {
+    bandHz: options.bandMhz,
+    lineImpedanceOhm: options.lineOhm,
+    tolerance: { ...DEFAULT_TOLERANCE, samples: options.toleranceSamples, seed: options.seed },
+  };
+  if (analysisOptions) checkAnalysisOptions(shape.frequencyHz, analysisOptions);
+  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;
+  if (options.json) {
+    const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks };
+    process.stdout.write(`${JSON.stringify({ ...summary, ...extra })}\n`);
+    return;
+  }
+  const text = [summaryText(shape.name ?? path, summary)];
+  if (analysis) text.push("", analysisText(analysis));
+  process.stdout.write(`${text.join("\n")}\n`);
 }

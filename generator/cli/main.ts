@@ -18,6 +18,10 @@ program
   .argument("<shape>", "shape file (JSON)")
   .option("--json", "print one JSON object instead of the readable report")
   .option("--segments-per-wavelength <n>", "segments per wavelength (default 25)", wholeNumber("--segments-per-wavelength", 5, 400))
+  .option("--band-mhz <LO:HI>", "band edges in MHz: adds sweep, feed match, tolerance, pattern and checks", bandMhz("--band-mhz"))
+  .option("--line-ohm <Z0>", "feed line impedance in Ω", positiveNumber("--line-ohm"), 50)
+  .option("--tolerance-samples <N>", "bent copies in the tolerance study", wholeNumber("--tolerance-samples", 1, 100000), 64)
+  .option("--seed <S>", "seed of the tolerance study", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
   .action((shape: string, opts) => analyzeCommand(shape, opts));
 
 program

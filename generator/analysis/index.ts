@@ -1,0 +1,5 @@
+export { analyzeDesign, checkAnalysisOptions, type Analysis, type AnalysisOptions, type PatternFigures } from "./analyzeDesign.js";
+export { bandSweep, sweepFrequencies, type Sweep, type SweepPoint } from "./sweep.js";
+export { suggestMatch, BALUN_NOTE, type MatchSuggestion, type MatchComponent } from "./feedMatch.js";
+export { toleranceStudy, perturbShape, DEFAULT_TOLERANCE, type ToleranceStudy, type ToleranceOptions } from "./tolerance.js";
+export { swr, reflectionCoefficient, returnLossDb, mismatchEfficiency } from "./swr.js";
