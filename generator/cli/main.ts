@@ -3,6 +3,7 @@
 import { Command, CommanderError } from "commander";
 import { analyzeCommand } from "./analyzeCommand.js";
 import { runReportingErrors } from "./errors.js";
+import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCommand } from "./catalogCommands.js";
 import { designCommand } from "./designCommand.js";
 import { bandMhz, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { VARIANTS } from "../design/request.js";
@@ -38,6 +39,32 @@ program
   .option("--json", "print one JSON object")
   .option("--out <file>", "write the winning shape as a shape file")
   .action((opts) => designCommand(opts));
+
+program
+  .command("generate")
+  .description("compute every design of the grid that is missing or stale, on a worker pool")
+  .option("--grid <file>", "grid file", DEFAULT_GRID)
+  .option("--out <dir>", "entries folder", DEFAULT_ENTRIES)
+  .option("--workers <n>", "worker threads", wholeNumber("--workers", 1, 64), 2)
+  .option("--shard <I/N>", "compute only shard I of N (1-based), for array jobs")
+  .option("--only <pattern>", "only ids matching the pattern (* is a wildcard), e.g. '2m-*'")
+  .action((opts) => generateCommand(opts));
+
+program
+  .command("merge")
+  .description("join the entries of several generate runs (shards) into one folder")
+  .argument("<dirs...>", "folders written by generate --out")
+  .option("--out <dir>", "merged entries folder", DEFAULT_ENTRIES)
+  .action((dirs: string[], opts) => mergeCommand(dirs, opts));
+
+program
+  .command("verify")
+  .description("check every entry's schema and hashes and recompute a sample")
+  .option("--grid <file>", "grid file", DEFAULT_GRID)
+  .option("--dir <dir>", "entries folder", DEFAULT_ENTRIES)
+  .option("--sample <n>", "entries to recompute", wholeNumber("--sample", 0, 100000), 3)
+  .option("--seed <s>", "seed choosing the sample", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
+  .action((opts) => verifyCommand(opts));
 
 await runReportingErrors(async () => {
   try {

@@ -2,8 +2,9 @@
 // ∈ [0,1]^n, σ0 = 0.25), then a Nelder–Mead polish from the best point (step 0.02 in z). Both are
 // seeded; the search never throws for a numerical outcome: a design that meets no constraint is
 // returned with status "infeasible" and the reasons. For direct-feed designs the search checks SWR
-// at 5 band frequencies against 97.5 % of the limit, the polish at all 11 against the limit itself.
-// `start` skips the search and only polishes (a shape found in wavelength units, re-used per band).
+// at the band edges and centre against 97.5 % of the limit, the polish at all 11 against the limit itself.
+// `start` skips the search and only polishes (a shape found in wavelength units, re-used per band);
+// with `polishOnly: false` it is the search's starting point instead of the box centre.
 import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
 import { parameterBounds } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
@@ -11,7 +12,7 @@ import { checkFrequencies, evaluate, shapeOf, specOf, type Evaluation } from "./
 import { limitsOf, type DesignRequest } from "./request.js";
 
 export const SWEEP_POINTS_IN_BAND = 11;
-const SEARCH_SWR_POINTS = 5;
+const SEARCH_SWR_POINTS = 3; // band edges and centre; the polish checks all 11
 
 export interface DesignOutcome {
   status: "ok" | "infeasible";
@@ -31,7 +32,7 @@ export interface DesignProgress {
 
 export function designBentArm(
   r: DesignRequest,
-  options: { start?: number[]; onProgress?: (p: DesignProgress) => void } = {},
+  options: { start?: number[]; polishOnly?: boolean; onProgress?: (p: DesignProgress) => void } = {},
 ): DesignOutcome {
   const n = 2 * r.piecesPerArm - 1;
   const { lower, upper } = parameterBounds(specOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
@@ -50,11 +51,13 @@ export function designBentArm(
     return e.score;
   };
 
-  let z0 = options.start ? toZ(options.start) : new Array(n).fill(0.5);
+  const clamp01 = (v: number) => Math.min(1, Math.max(0, v));
+  let z0 = options.start ? toZ(options.start).map(clamp01) : new Array(n).fill(0.5);
+  const polishOnly = options.start !== undefined && options.polishOnly !== false;
   let stopReasons: StopReason[] = [];
   let history: HistoryEntry[] = [];
   let searchEvaluations = 0;
-  if (!options.start) {
+  if (!polishOnly) {
     const ipop = createIpop({
       x0: z0,
       sigma0: 0.25,
@@ -77,8 +80,8 @@ export function designBentArm(
     searchEvaluations = result.evaluations;
   }
   const polish = nelderMead((z) => score(z, polishFrequencies, r.swrLimit), {
-    x0: z0.map((v) => Math.min(1, Math.max(0, v))),
-    initialStep: options.start ? 0.01 : 0.02,
+    x0: z0.map(clamp01),
+    initialStep: polishOnly ? 0.01 : 0.02,
     lowerBounds: new Array(n).fill(0),
     upperBounds: new Array(n).fill(1),
     maxEvaluations: 60 * n,

@@ -1,0 +1,117 @@
+// Computes catalog designs. A free-space shape scales with wavelength, so each (length, pieces,
+// variant) is searched once in wavelength units (λ = 1 m, reference radius, perfect conductor,
+// reference relative bandwidth) and every band only polishes that shape with its own wire, conductor
+// and band (Nelder–Mead). If the polished shape misses a constraint (a direct-feed band wider than
+// the reference one, say), that band gets a full search of its own. Pure: same inputs, same bytes.
+import { analyzeDesign } from "../analysis/index.js";
+import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
+import { shapeOf } from "../design/objective.js";
+import { parseDesignRequest, type DesignRequest } from "../design/request.js";
+import { SOLVER_VERSION } from "../em/index.js";
+import { SPEED_OF_LIGHT_M_PER_S } from "../units.js";
+import { buildEntry } from "./entryBuild.js";
+import type { Entry } from "./entrySchema.js";
+import { entryId, type CellRequest, type Grid } from "./grid.js";
+import { canonicalJson, roundDeep, sha256 } from "./hash.js";
+
+export { GENERATOR_VERSION_TAG as GENERATOR_VERSION } from "./entryBuild.js";
+import { GENERATOR_VERSION_TAG as GENERATOR_VERSION } from "./entryBuild.js";
+
+export interface ReferenceKey {
+  lengthWl: number;
+  piecesPerArm: number;
+  variant: CellRequest["variant"];
+}
+
+export interface ReferenceResult extends ReferenceKey {
+  id: string;
+  inputHash: string;
+  status: DesignOutcome["status"];
+  x: number[];
+  gainDbi: number | null;
+  evaluations: number;
+  stopReasons: DesignOutcome["stopReasons"];
+  history: DesignOutcome["history"];
+}
+
+export const referenceId = (k: ReferenceKey): string => entryId("ref", k.lengthWl, k.piecesPerArm, k.variant);
+
+export function referenceRequest(grid: Grid, k: ReferenceKey): DesignRequest {
+  const f = SPEED_OF_LIGHT_M_PER_S; // λ = 1 m
+  const half = grid.reference.relativeBandwidth / 2;
+  return parseDesignRequest({
+    frequencyHz: f,
+    lengthWl: k.lengthWl,
+    piecesPerArm: k.piecesPerArm,
+    wireDiameterM: 2 * grid.reference.radiusWl,
+    conductor: "perfect",
+    variant: k.variant,
+    bandHz: [f * (1 - half), f * (1 + half)],
+    lineImpedanceOhm: grid.lineImpedanceOhm,
+    swrLimit: grid.swrLimit,
+    seed: grid.seed,
+    segmentsPerWavelength: grid.segmentsPerWavelength,
+  });
+}
+
+export const referenceHash = (grid: Grid, k: ReferenceKey): string =>
+  sha256(canonicalJson({ request: referenceRequest(grid, k), versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION } }));
+
+export function computeReference(grid: Grid, k: ReferenceKey): ReferenceResult {
+  const outcome = designBentArm(referenceRequest(grid, k));
+  return roundDeep({
+    ...k,
+    id: referenceId(k),
+    inputHash: referenceHash(grid, k),
+    status: outcome.status,
+    x: outcome.x,
+    gainDbi: outcome.evaluation.gainDbi,
+    evaluations: outcome.evaluations,
+    stopReasons: outcome.stopReasons,
+    history: outcome.history,
+  }, 15); // the start point of every band's polish: keep it exact
+}
+
+export function bandRequest(grid: Grid, cell: CellRequest): DesignRequest {
+  return parseDesignRequest({
+    frequencyHz: cell.band.designMhz * 1e6,
+    lengthWl: cell.lengthWl,
+    piecesPerArm: cell.piecesPerArm,
+    wireDiameterM: cell.band.wireDiameterMm / 1000,
+    conductor: cell.band.conductor,
+    variant: cell.variant,
+    bandHz: [cell.band.lowMhz * 1e6, cell.band.highMhz * 1e6],
+    lineImpedanceOhm: grid.lineImpedanceOhm,
+    swrLimit: grid.swrLimit,
+    seed: grid.seed,
+    segmentsPerWavelength: grid.segmentsPerWavelength,
+  });
+}
+
+/** The hash of everything an entry depends on: its request, tolerance settings, reference, versions. */
+export function entryInputHash(grid: Grid, cell: CellRequest): string {
+  return sha256(canonicalJson({
+    request: bandRequest(grid, cell),
+    band: cell.band,
+    tolerance: grid.tolerance,
+    reference: referenceHash(grid, cell),
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
+  }));
+}
+
+export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
+  const request = bandRequest(grid, cell);
+  let outcome = reference.status === "ok" ? designBentArm(request, { start: reference.x }) : null;
+  let startedFrom: "reference" | "search" = "reference";
+  if (!outcome || outcome.status !== "ok") {
+    outcome = designBentArm(request, { start: reference.x, polishOnly: false });
+    startedFrom = "search";
+  }
+  const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
+  const analysis = outcome.status === "ok"
+    ? analyzeDesign(shapeFor(outcome, request), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
+    : null;
+  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance });
+}
+
+const shapeFor = (o: DesignOutcome, r: DesignRequest) => shapeOf(o.x, r);

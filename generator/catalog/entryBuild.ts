@@ -1,0 +1,121 @@
+// Assembles a catalog entry from a design outcome and its analysis, rounds it (hash.ts) and seals it
+// with a content hash over its canonical JSON (everything but the hash itself).
+import type { Analysis } from "../analysis/index.js";
+import type { DesignOutcome } from "../design/designBentArm.js";
+import { GEOMETRY_PENALTY } from "../design/objective.js";
+import type { DesignRequest } from "../design/request.js";
+import { SOLVER_VERSION } from "../em/index.js";
+import { pieceLengthsM, unpack, wirePointsM } from "../shapes/bentArm.js";
+import { DEG_PER_RAD, wavelengthM } from "../units.js";
+import { CUT_STEP_DEG, GRID_PHI_STEP_DEG, GRID_THETA_STEP_DEG } from "../analysis/analyzeDesign.js";
+import { ENTRY_SCHEMA_VERSION, type Entry } from "./entrySchema.js";
+import type { CellRequest, Grid } from "./grid.js";
+import { canonicalJson, roundDeep, sha256 } from "./hash.js";
+
+export const GENERATOR_VERSION_TAG = "bentwire-catalog-1";
+
+export interface EntryParts {
+  grid: Grid;
+  cell: CellRequest;
+  request: DesignRequest;
+  outcome: DesignOutcome;
+  startedFrom: "reference" | "search";
+  analysis: Analysis | null;
+  inputHash: string;
+  tolerance: { samples: number; bendSigmaDeg: number; lengthSigmaFraction: number };
+}
+
+const variantWords = { "max-gain": "most gain", "direct-feed": "direct 50 Ω feed" } as const;
+
+export function entryTitle(cell: CellRequest): string {
+  const pieces = cell.piecesPerArm === 1 ? "1 piece" : `${cell.piecesPerArm} pieces`;
+  return `${cell.band.name}: ${cell.lengthWl} λ wire, ${pieces} per arm, ${variantWords[cell.variant]}`;
+}
+
+export function buildEntry(p: EntryParts): Entry {
+  const { cell, request, outcome, analysis } = p;
+  const lambdaM = wavelengthM(request.frequencyHz);
+  const params = unpack(outcome.x, request.piecesPerArm);
+  const spec = { piecesPerArm: request.piecesPerArm, wireLengthM: request.lengthWl * lambdaM };
+  const points = wirePointsM(params, spec);
+  const xs = points.map((q) => q[0]), ys = points.map((q) => q[1]);
+  const ok = outcome.status === "ok" && analysis !== null;
+  const a = analysis!;
+  const body: Omit<Entry, "contentHash"> = {
+    schemaVersion: ENTRY_SCHEMA_VERSION,
+    id: cell.id,
+    title: entryTitle(cell),
+    status: ok ? "ok" : "infeasible",
+    message: outcome.message,
+    inputs: {
+      bandId: cell.band.id,
+      bandName: cell.band.name,
+      bandNote: cell.band.note,
+      bandLowHz: request.bandHz![0],
+      bandHighHz: request.bandHz![1],
+      frequencyHz: request.frequencyHz,
+      lengthWl: request.lengthWl,
+      lengthM: request.lengthWl * lambdaM,
+      piecesPerArm: request.piecesPerArm,
+      variant: request.variant,
+      wireDiameterM: request.wireDiameterM,
+      conductor: cell.band.conductor,
+      lineImpedanceOhm: request.lineImpedanceOhm,
+      swrLimit: request.swrLimit,
+      seed: request.seed,
+      segmentsPerWavelength: request.segmentsPerWavelength ?? 25,
+      tolerance: { samples: p.tolerance.samples, bendSigmaDeg: p.tolerance.bendSigmaDeg, lengthSigmaFraction: p.tolerance.lengthSigmaFraction },
+    },
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION_TAG },
+    inputHash: p.inputHash,
+    shape: ok ? {
+      pointsM: points,
+      feedVertex: request.piecesPerArm,
+      pieceLengthsM: pieceLengthsM(params, spec),
+      firstAngleDeg: params.firstAngleRad * DEG_PER_RAD,
+      bendAnglesDeg: params.bendAnglesRad.map((b) => b * DEG_PER_RAD),
+      spanM: { x: Math.max(...xs) - Math.min(...xs), y: Math.max(...ys) - Math.min(...ys) },
+    } : null,
+    figures: ok ? {
+      gainDbi: a.design.gainDbi,
+      directivityDbi: a.design.directivityDbi,
+      radiationEfficiency: a.design.radiationEfficiency,
+      inputImpedanceOhm: a.design.inputImpedanceOhm,
+      swr: a.match.swrAtDesign,
+      peakDirection: a.design.peakDirection,
+      beamwidthAlongPhiDeg: a.pattern.beamwidthAlongPhiDeg,
+      beamwidthAlongThetaDeg: a.pattern.beamwidthAlongThetaDeg,
+      frontToBackDb: a.pattern.frontToBackDb,
+      polarization: a.pattern.polarization,
+      lobe: a.pattern.words.lobe,
+      mounting: a.pattern.words.mounting,
+    } : null,
+    sweep: ok ? a.sweep : null,
+    match: ok ? a.match : null,
+    tolerance: ok ? a.tolerance : null,
+    pattern: ok ? {
+      cutStepDeg: CUT_STEP_DEG,
+      cutAlongPhiDbi: a.pattern.cutAlongPhiDbi,
+      cutAlongThetaDbi: a.pattern.cutAlongThetaDbi,
+      gridThetaStepDeg: GRID_THETA_STEP_DEG,
+      gridPhiStepDeg: GRID_PHI_STEP_DEG,
+      gridDbi: a.pattern.gridDbi,
+    } : null,
+    checks: ok ? { ...a.checks, warnings: a.warnings } : null,
+    optimizer: {
+      evaluations: outcome.evaluations,
+      searchEvaluations: outcome.searchEvaluations,
+      startedFrom: p.startedFrom,
+      stopReasons: outcome.stopReasons,
+      // best-so-far as gain in dBi where feasible (scores below 0 are −gain)
+      history: outcome.history.filter((h) => h.bestF < GEOMETRY_PENALTY).map((h) => ({ evaluations: h.evaluations, bestF: h.bestF })),
+    },
+  };
+  return sealEntry(roundDeep(body) as Omit<Entry, "contentHash">);
+}
+
+export const contentHashOf = (body: Omit<Entry, "contentHash">): string => sha256(canonicalJson(body));
+
+export function sealEntry(body: Omit<Entry, "contentHash">): Entry {
+  return { ...body, contentHash: contentHashOf(body) } as Entry;
+}

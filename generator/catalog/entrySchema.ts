@@ -1,0 +1,125 @@
+// The catalog entry: one JSON file per design, shared by the generator (zod 4) and the site's
+// content collection (Astro's bundled zod 3). The schema is built by a factory over the small part
+// of the zod API that both versions share, so there is one definition for both.
+import { z as z4 } from "zod";
+
+/** Typed as zod 4; at run time only the part of the API that zod 3 shares is called. */
+type Z = typeof z4;
+
+export const ENTRY_SCHEMA_VERSION = 1;
+
+export function makeEntrySchema(z: Z) {
+  const num = z.number();
+  const complex = z.object({ re: num, im: num }).strict();
+  const percentiles = z.object({ p5: num.nullable(), p50: num.nullable(), p95: num.nullable() }).strict();
+  const component = z.object({ kind: z.enum(["inductor", "capacitor"]), position: z.enum(["series", "shunt"]), value: num }).strict();
+  const inputs = z.object({
+    bandId: z.string(),
+    bandName: z.string(),
+    bandNote: z.string(),
+    bandLowHz: num,
+    bandHighHz: num,
+    frequencyHz: num,
+    lengthWl: num,
+    lengthM: num,
+    piecesPerArm: z.number().int(),
+    variant: z.enum(["max-gain", "direct-feed"]),
+    wireDiameterM: num,
+    conductor: z.enum(["perfect", "copper", "aluminium"]),
+    lineImpedanceOhm: num,
+    swrLimit: num,
+    seed: z.number().int(),
+    segmentsPerWavelength: num,
+    tolerance: z.object({ samples: z.number().int(), bendSigmaDeg: num, lengthSigmaFraction: num }).strict(),
+  }).strict();
+  const shape = z.object({
+    pointsM: z.array(z.tuple([num, num, num])),
+    feedVertex: z.number().int(),
+    pieceLengthsM: z.array(num),
+    firstAngleDeg: num,
+    bendAnglesDeg: z.array(num),
+    spanM: z.object({ x: num, y: num }).strict(),
+  }).strict();
+  const figures = z.object({
+    gainDbi: num,
+    directivityDbi: num,
+    radiationEfficiency: num,
+    inputImpedanceOhm: complex,
+    swr: num,
+    peakDirection: z.object({ thetaDeg: num, phiDeg: num }).strict(),
+    beamwidthAlongPhiDeg: num.nullable(),
+    beamwidthAlongThetaDeg: num.nullable(),
+    frontToBackDb: num,
+    polarization: z.object({ tiltDeg: num, axialRatioDb: num, sense: z.enum(["linear", "right-hand", "left-hand"]) }).strict(),
+    lobe: z.string(),
+    mounting: z.string(),
+  }).strict();
+  const sweep = z.object({
+    lineImpedanceOhm: num,
+    points: z.array(z.object({ frequencyHz: num, inBand: z.boolean(), impedanceOhm: complex, swr: num.nullable(), gainDbi: num, realizedGainDbi: num.nullable() }).strict()),
+    swr2Span: z.object({ lowHz: num, highHz: num, widthHz: num, touchesSweepEdge: z.boolean() }).strict().nullable(),
+  }).strict();
+  const match = z.object({
+    swrAtDesign: num.nullable(),
+    needed: z.boolean(),
+    networks: z.array(z.object({ topology: z.string(), components: z.array(component), e12Components: z.array(component), bandSwr: z.array(num.nullable()), bandSwrE12: z.array(num.nullable()) }).strict()),
+    quarterWave: z.object({ idealImpedanceOhm: num, cableImpedanceOhm: num, cable: z.string(), velocityFactor: num, physicalLengthM: num, bandSwr: z.array(num.nullable()) }).strict().nullable(),
+    balunNote: z.string(),
+  }).strict();
+  const tolerance = z.object({
+    samples: z.number().int(),
+    failedSamples: z.number().int(),
+    bendSigmaDeg: num,
+    lengthSigmaFraction: num,
+    seed: z.number().int(),
+    nominalGainDbi: num,
+    gainDbi: percentiles,
+    swr: percentiles,
+    fragile: z.boolean(),
+  }).strict();
+  const pattern = z.object({
+    cutStepDeg: num,
+    cutAlongPhiDbi: z.array(num),
+    cutAlongThetaDbi: z.array(num),
+    gridThetaStepDeg: num,
+    gridPhiStepDeg: num,
+    gridDbi: z.array(z.array(num)),
+  }).strict();
+  const checks = z.object({
+    segmentsPerWavelength: z.tuple([num, num]),
+    gainChangeDb: num,
+    impedanceChangeOhm: num,
+    energyBalanceError: num,
+    warnings: z.array(z.string()),
+  }).strict();
+  const optimizer = z.object({
+    evaluations: z.number().int(),
+    searchEvaluations: z.number().int(),
+    startedFrom: z.enum(["search", "reference"]),
+    stopReasons: z.array(z.object({ reason: z.string(), value: num.nullable() }).strict()),
+    history: z.array(z.object({ evaluations: z.number().int(), bestF: num.nullable() }).strict()),
+  }).strict();
+  return z.object({
+    schemaVersion: z.literal(ENTRY_SCHEMA_VERSION),
+    id: z.string().regex(/^[a-z0-9][a-z0-9.-]*$/),
+    title: z.string(),
+    status: z.enum(["ok", "infeasible"]),
+    message: z.string(),
+    inputs,
+    versions: z.object({ solver: z.string(), generator: z.string() }).strict(),
+    inputHash: z.string().regex(/^[0-9a-f]{64}$/),
+    shape: shape.nullable(),
+    figures: figures.nullable(),
+    sweep: sweep.nullable(),
+    match: match.nullable(),
+    tolerance: tolerance.nullable(),
+    pattern: pattern.nullable(),
+    checks: checks.nullable(),
+    optimizer,
+    contentHash: z.string().regex(/^[0-9a-f]{64}$/),
+  }).strict();
+}
+
+export const entrySchema = makeEntrySchema(z4);
+
+export type Entry = z4.infer<typeof entrySchema>;

@@ -1,0 +1,110 @@
+// `generate`: expands the grid, keeps every entry whose input hash is present and valid, and
+// computes the rest on a worker pool (piscina): first the wavelength-unit reference searches the
+// missing entries need, then the entries themselves, each as soon as its reference is ready. Every
+// result is written atomically as it arrives.
+import { cpus } from "node:os";
+import { Piscina } from "piscina";
+import { InputError } from "../errors.js";
+import { entryInputHash, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
+import type { Entry } from "./entrySchema.js";
+import { expandGrid, shardOf, type CellRequest, type Grid } from "./grid.js";
+import { readEntry, readReference, referenceDir, writeEntry, writeReference } from "./store.js";
+import type { Task } from "./worker.js";
+
+export interface GenerateOptions {
+  grid: Grid;
+  outDir: string;
+  workers: number;
+  shard?: { index: number; count: number };
+  only?: string;
+  onProgress?: (p: { done: number; total: number; label: string }) => void;
+}
+
+export interface GenerateReport {
+  selected: number;
+  upToDate: number;
+  computed: number;
+  recomputed: string[];
+  referencesComputed: number;
+  infeasible: number;
+  seconds: number;
+}
+
+/** `--only` pattern: * matches any run of characters; anything else is literal. */
+export function onlyMatcher(pattern: string): (id: string) => boolean {
+  if (!/^[a-z0-9.*-]+$/.test(pattern)) throw new InputError(`--only: pattern may hold lower-case letters, digits, '.', '-' and '*' (got ${pattern})`);
+  const re = new RegExp(`^${pattern.replace(/\./g, "\\.").replace(/\*/g, ".*")}$`);
+  return (id) => re.test(id);
+}
+
+export async function selectWork(o: GenerateOptions): Promise<{ cells: CellRequest[]; todo: CellRequest[]; recomputed: string[] }> {
+  let cells = expandGrid(o.grid);
+  if (o.only) {
+    const matches = onlyMatcher(o.only);
+    cells = cells.filter((c) => matches(c.id));
+  }
+  if (o.shard) cells = shardOf(cells, o.shard);
+  const todo: CellRequest[] = [];
+  const recomputed: string[] = [];
+  for (const cell of cells) {
+    const found = await readEntry(o.outDir, cell.id);
+    if (found && found.ok && found.value.inputHash === entryInputHash(o.grid, cell)) continue;
+    if (found) recomputed.push(found.ok ? `${cell.id}: inputs changed` : found.problem);
+    todo.push(cell);
+  }
+  return { cells, todo, recomputed };
+}
+
+const keyOf = (c: CellRequest): ReferenceKey => ({ lengthWl: c.lengthWl, piecesPerArm: c.piecesPerArm, variant: c.variant });
+
+export async function generate(o: GenerateOptions): Promise<GenerateReport> {
+  const t0 = performance.now();
+  const { cells, todo, recomputed } = await selectWork(o);
+  const refDir = referenceDir(o.outDir);
+  const keys = new Map<string, ReferenceKey>();
+  for (const c of todo) keys.set(referenceId(keyOf(c)), keyOf(c));
+  const needRefs: ReferenceKey[] = [];
+  const refs = new Map<string, Promise<ReferenceResult>>();
+  for (const [id, key] of keys) {
+    const stored = await readReference(refDir, id, referenceHash(o.grid, key));
+    if (stored) refs.set(id, Promise.resolve(stored));
+    else needRefs.push(key);
+  }
+  const total = todo.length + needRefs.length;
+  let done = 0;
+  let infeasible = 0;
+  const tick = (label: string) => o.onProgress?.({ done: ++done, total, label });
+  if (total === 0) return { selected: cells.length, upToDate: cells.length, computed: 0, recomputed, referencesComputed: 0, infeasible: 0, seconds: (performance.now() - t0) / 1000 };
+
+  const workers = Math.max(1, Math.min(o.workers, cpus().length * 4));
+  const execArgv = process.execArgv.some((a) => a.includes("tsx")) ? process.execArgv : [...process.execArgv, "--import", "tsx"];
+  const pool = new Piscina({ filename: new URL("./worker.ts", import.meta.url).href, minThreads: workers, maxThreads: workers, idleTimeout: 1000, execArgv });
+  try {
+    for (const key of needRefs) {
+      const id = referenceId(key);
+      refs.set(id, (pool.run({ kind: "reference", grid: o.grid, key } satisfies Task) as Promise<ReferenceResult>).then(async (r) => {
+        await writeReference(refDir, r);
+        tick(id);
+        return r;
+      }));
+    }
+    await Promise.all(todo.map(async (cell) => {
+      const reference = await refs.get(referenceId(keyOf(cell)))!;
+      const entry = (await pool.run({ kind: "entry", grid: o.grid, cell, reference } satisfies Task)) as Entry;
+      await writeEntry(o.outDir, entry);
+      if (entry.status !== "ok") infeasible++;
+      tick(cell.id);
+    }));
+  } finally {
+    await pool.destroy();
+  }
+  return {
+    selected: cells.length,
+    upToDate: cells.length - todo.length,
+    computed: todo.length,
+    recomputed,
+    referencesComputed: needRefs.length,
+    infeasible,
+    seconds: (performance.now() - t0) / 1000,
+  };
+}
