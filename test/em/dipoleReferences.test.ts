@@ -1,3 +1,4 @@
+// Straight-wire trends (the fixed reference values are in generator/validation/referenceChecks.ts).
 // Straight-wire references. Directivities: Balanis, Antenna Theory, 3rd ed., ch. 4 (sinusoidal
 // current, infinitely thin wire; table 4.2 / eqs. 4-91 and 4-62): 0.5λ 2.15 dBi, 1.0λ 3.82 dBi,
 // 1.25λ 5.16 dBi, 1.5λ 3.48 dBi; Hertzian (short) dipole 1.76 dBi (eq. 4-31, D = 1.5).
@@ -10,21 +11,12 @@ const balanisDbi: [number, number][] = [[0.5, 2.15], [1.0, 3.82], [1.25, 5.16], 
 
 describe("straight dipole directivity (Balanis, Antenna Theory, ch. 4)", () => {
   for (const [lengthWl, refDbi] of balanisDbi) {
-    it(`${lengthWl}λ dipole of radius 1e-3λ is within 0.2 dB of ${refDbi} dBi`, () => {
-      const s = solveShape(straightDipole(lengthWl, 1e-3, { segmentsPerWavelength: 50 }));
-      expect(Math.abs(s.peakDirectivityDbi - refDbi)).toBeLessThan(0.2);
-    });
     it(`${lengthWl}λ dipole comes closer to ${refDbi} dBi as the wire thins (1e-3λ → 1e-5λ)`, () => {
       const thick = solveShape(straightDipole(lengthWl, 1e-3, { segmentsPerWavelength: 50 }));
       const thin = solveShape(straightDipole(lengthWl, 1e-5, { segmentsPerWavelength: 50 }));
       expect(Math.abs(thin.peakDirectivityDbi - refDbi)).toBeLessThan(Math.abs(thick.peakDirectivityDbi - refDbi));
     });
   }
-
-  it("0.05λ short dipole has 1.76 dBi, the Hertzian dipole's D = 1.5 (Balanis eq. 4-31)", () => {
-    const s = solveShape(straightDipole(0.05, 1e-4));
-    expect(s.peakDirectivityDbi).toBeCloseTo(1.76, 1);
-  });
 
   it("peak of a dipole along x lies broadside, in the y–z plane", () => {
     const s = solveShape(straightDipole(0.5, 1e-3));
@@ -41,11 +33,10 @@ describe("half-wave dipole input impedance (Balanis eq. 8-61: 73 + j42.5 Ω)", (
     return Math.hypot(z.re - ref.re, z.im - ref.im);
   };
 
-  it("tends to 73 + j42.5 Ω as the wire gets very thin", () => {
+  it("tends to 73 + j42.5 Ω as the wire gets very thin (the 1e-7λ value itself is a reference check)", () => {
     const d = [1e-3, 1e-5, 1e-7].map(distance);
     expect(d[1]).toBeLessThan(d[0]);
     expect(d[2]).toBeLessThan(d[1]);
-    expect(d[2]).toBeLessThan(4);
   });
 
   // first resonance (Im Z = 0) by bisection on the length
