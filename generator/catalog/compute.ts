@@ -1,8 +1,10 @@
 // Computes catalog designs. A free-space shape scales with wavelength, so each (length, pieces,
 // variant) is searched once in wavelength units (λ = 1 m, reference radius, perfect conductor,
 // reference relative bandwidth) and every band only polishes that shape with its own wire, conductor
-// and band (Nelder–Mead). If the polished shape misses a constraint (a direct-feed band wider than
-// the reference one, say), that band gets a full search of its own. Pure: same inputs, same bytes.
+// and band (Nelder–Mead). If the polished shape misses a constraint that the reference met (a
+// direct-feed band wider than the reference one, say), that band gets a full search of its own; if
+// the reference met none either (a centre-fed 1 λ or 2 λ wire sits at a current minimum, kilohms,
+// far from 50 Ω), the entry says so without a search. Pure: same inputs, same bytes.
 import { analyzeDesign } from "../analysis/index.js";
 import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
@@ -14,8 +16,7 @@ import type { Entry } from "./entrySchema.js";
 import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
-export { GENERATOR_VERSION_TAG as GENERATOR_VERSION } from "./entryBuild.js";
-import { GENERATOR_VERSION_TAG as GENERATOR_VERSION } from "./entryBuild.js";
+import { GENERATOR_VERSION } from "./versions.js";
 
 export interface ReferenceKey {
   lengthWl: number;
@@ -101,11 +102,15 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
 
 export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
   const request = bandRequest(grid, cell);
-  let outcome = reference.status === "ok" ? designBentArm(request, { start: reference.x }) : null;
+  // polish the reference shape (or, when the reference met no constraint, its least-bad attempt)
+  let outcome = designBentArm(request, { start: reference.x });
   let startedFrom: "reference" | "search" = "reference";
-  if (!outcome || outcome.status !== "ok") {
+  if (outcome.status !== "ok" && reference.status === "ok") {
+    // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
     outcome = designBentArm(request, { start: reference.x, polishOnly: false });
     startedFrom = "search";
+  } else if (outcome.status !== "ok") {
+    outcome = { ...outcome, message: `${outcome.message}; the search in wavelength units over a ${grid.reference.relativeBandwidth * 100} % band found no such shape either` };
   }
   const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
   const analysis = outcome.status === "ok"

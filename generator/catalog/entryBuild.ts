@@ -11,8 +11,8 @@ import { CUT_STEP_DEG, GRID_PHI_STEP_DEG, GRID_THETA_STEP_DEG } from "../analysi
 import { ENTRY_SCHEMA_VERSION, type Entry } from "./entrySchema.js";
 import type { CellRequest, Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
+import { GENERATOR_VERSION } from "./versions.js";
 
-export const GENERATOR_VERSION_TAG = "bentwire-catalog-1";
 
 export interface EntryParts {
   grid: Grid;
@@ -66,7 +66,7 @@ export function buildEntry(p: EntryParts): Entry {
       segmentsPerWavelength: request.segmentsPerWavelength ?? 25,
       tolerance: { samples: p.tolerance.samples, bendSigmaDeg: p.tolerance.bendSigmaDeg, lengthSigmaFraction: p.tolerance.lengthSigmaFraction },
     },
-    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION_TAG },
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
     inputHash: p.inputHash,
     shape: ok ? {
       pointsM: points,

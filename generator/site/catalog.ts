@@ -1,0 +1,103 @@
+// The catalog as the site sees it: checked entries grouped into bands, the designs of a band in
+// table order, the best few per band. Pure functions over entries; the pages only lay them out.
+import { checkEntryText } from "../catalog/store.js";
+import { isOk, type Entry, type OkEntry } from "./ok.js";
+
+export { isOk, type Entry, type OkEntry };
+
+/** Band ids and design ids become URL path pieces: only this alphabet is allowed. */
+export const URL_SAFE_ID = /^[a-z0-9][a-z0-9.-]*$/;
+
+/**
+ * Checks one entry file as the site needs it: the schema and content hash (checkEntryText), a file
+ * name that matches the id, and a band id that is safe in a URL. Throws one line naming the file.
+ */
+export function checkSiteEntry(text: string, fileName: string): Entry {
+  const checked = checkEntryText(text, fileName);
+  if (!checked.ok) {
+    throw new Error(`site entries: ${checked.problem}; run \`npm run -s bentwire -- generate\` to recompute it`);
+  }
+  const entry = checked.value;
+  if (`${entry.id}.json` !== fileName.replace(/^.*[\\/]/, "")) {
+    throw new Error(`site entries: ${fileName}: id "${entry.id}" does not match the file name`);
+  }
+  if (!URL_SAFE_ID.test(entry.inputs.bandId)) {
+    throw new Error(`site entries: ${fileName}: inputs.bandId must be lower-case letters, digits, dots and dashes`);
+  }
+  if (entry.status === "ok" && !isOk(entry)) {
+    throw new Error(`site entries: ${fileName}: status is ok but a result section is missing`);
+  }
+  return entry;
+}
+
+export interface Band {
+  id: string;
+  name: string;
+  note: string;
+  lowHz: number;
+  highHz: number;
+  designHz: number;
+  wireDiameterM: number;
+  conductor: Entry["inputs"]["conductor"];
+  entries: Entry[];
+  ok: OkEntry[];
+}
+
+/** Table order inside a band: gain, best first; then id for a stable order. */
+export function byGain(a: Entry, b: Entry): number {
+  const ga = a.figures?.gainDbi ?? -Infinity, gb = b.figures?.gainDbi ?? -Infinity;
+  return gb - ga || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
+}
+
+/** Designs grouped by band, bands in frequency order. Band facts come from the band's first entry. */
+export function bandsOf(entries: readonly Entry[]): Band[] {
+  const map = new Map<string, Entry[]>();
+  for (const e of [...entries].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))) {
+    const list = map.get(e.inputs.bandId) ?? [];
+    list.push(e);
+    map.set(e.inputs.bandId, list);
+  }
+  return [...map.values()]
+    .map((list): Band => {
+      const i = list[0].inputs;
+      const sorted = [...list].sort(byGain);
+      return {
+        id: i.bandId, name: i.bandName, note: i.bandNote, lowHz: i.bandLowHz, highHz: i.bandHighHz, designHz: i.frequencyHz,
+        wireDiameterM: i.wireDiameterM, conductor: i.conductor, entries: sorted, ok: sorted.filter(isOk),
+      };
+    })
+    .sort((a, b) => a.lowHz - b.lowHz || (a.id < b.id ? -1 : 1));
+}
+
+/** The best `n` buildable designs of a band, at most one per (length, pieces) so the list varies. */
+export function bestOf(band: Band, n: number): OkEntry[] {
+  const seen = new Set<string>();
+  const out: OkEntry[] = [];
+  for (const e of band.ok) {
+    const key = `${e.inputs.lengthWl}/${e.inputs.piecesPerArm}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    out.push(e);
+    if (out.length === n) break;
+  }
+  return out;
+}
+
+/** The buildable design with the widest SWR-below-limit span in a band, if any has one. */
+export function widestMatch(band: Band): OkEntry | null {
+  let best: OkEntry | null = null;
+  for (const e of band.ok) {
+    const w = e.sweep.swr2Span?.widthHz ?? 0;
+    if (w > 0 && (best === null || w > (best.sweep.swr2Span?.widthHz ?? 0))) best = e;
+  }
+  return best;
+}
+
+/** Catalog totals for the home page. */
+export function totals(entries: readonly Entry[]): { designs: number; buildable: number; bands: number } {
+  return {
+    designs: entries.length,
+    buildable: entries.filter(isOk).length,
+    bands: new Set(entries.map((e) => e.inputs.bandId)).size,
+  };
+}

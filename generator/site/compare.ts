@@ -1,0 +1,93 @@
+// The compare page's overlaid pattern cuts: several designs' gain around one principal plane on one
+// polar chart, each turned so its own main lobe points up. Returns SVG text; every label is
+// escaped, so it is safe to place even when it came from an entry.
+import * as f from "./format.js";
+
+export interface PolarSeries {
+  label: string;
+  /** Gain every `stepDeg` from −180° to 180° − step, 0 = the main lobe. */
+  valuesDbi: readonly number[];
+  stepDeg: number;
+}
+
+export const SERIES_CLASSES = ["s1", "s2", "s3"] as const;
+export const RANGE_DB = 30;
+
+export function escapeText(text: string): string {
+  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+}
+
+const n = (v: number): string => (Math.round(v * 10) / 10).toString();
+
+/** One polar chart with up to three series; the outer ring is the best peak rounded up to 1 dB. */
+export function overlayPolarSvg(series: readonly PolarSeries[], title: string, sizePx = 360): string {
+  const cx = sizePx / 2, cy = sizePx / 2 + 6, rMax = sizePx / 2 - 34;
+  const all = series.flatMap((s) => s.valuesDbi);
+  const top = Math.ceil(all.length ? Math.max(...all) : 0);
+  const floor = top - RANGE_DB;
+  const radius = (g: number) => (Math.max(g, floor) - floor) / RANGE_DB * rMax;
+  const rings = [0, 10, 20, 30].map((d) => {
+    const r = radius(top - d);
+    return `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(r)}" class="ring"/>` +
+      `<text x="${n(cx + 3)}" y="${n(cy - r - 2)}" class="ringlabel">${escapeText(f.fixed(top - d, 0))} dBi</text>`;
+  }).join("");
+  const spokes = Array.from({ length: 12 }, (_, i) => {
+    const a = (i * 30 * Math.PI) / 180;
+    return `<line x1="${n(cx)}" y1="${n(cy)}" x2="${n(cx + rMax * Math.sin(a))}" y2="${n(cy - rMax * Math.cos(a))}" class="spoke"/>`;
+  }).join("");
+  const paths = series.slice(0, SERIES_CLASSES.length).map((s, k) => {
+    const d = s.valuesDbi.map((g, i) => {
+      const a = ((-180 + i * s.stepDeg) * Math.PI) / 180;
+      const r = radius(g);
+      return `${i === 0 ? "M" : "L"}${n(cx + r * Math.sin(a))},${n(cy - r * Math.cos(a))}`;
+    }).join("") + "Z";
+    return `<path d="${d}" class="trace ${SERIES_CLASSES[k]}"><title>${escapeText(s.label)}</title></path>`;
+  }).join("");
+  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${sizePx} ${sizePx + 12}" role="img" aria-label="${escapeText(title)}" class="overlay">` +
+    `<text x="${n(cx)}" y="16" class="charttitle" text-anchor="middle">${escapeText(title)}</text>` +
+    rings + spokes + paths +
+    `<text x="${n(cx)}" y="${n(cy - rMax - 6)}" class="ringlabel" text-anchor="middle">main lobe</text></svg>`;
+}
+
+export interface CompareDesign {
+  id: string;
+  title: string;
+  inputs: { bandName: string; frequencyHz: number; lengthWl: number; lengthM: number; piecesPerArm: number; variant: f.Variant; wireDiameterM: number };
+  figures: { gainDbi: number; swr: number; radiationEfficiency: number; frontToBackDb: number; beamwidthAlongPhiDeg: number | null; beamwidthAlongThetaDeg: number | null };
+  shape: { spanM: { x: number; y: number } };
+  sweep: { swr2Span: { widthHz: number } | null };
+  tolerance: { fragile: boolean; gainDbi: { p5: number | null } };
+  pattern: { cutStepDeg: number; cutAlongPhiDbi: number[]; cutAlongThetaDbi: number[] };
+}
+
+/** The side-by-side table: one row per figure, one text per design. */
+export function compareRows(designs: readonly CompareDesign[]): { label: string; values: string[] }[] {
+  const row = (label: string, pick: (d: CompareDesign) => string) => ({ label, values: designs.map(pick) });
+  const bw = (v: number | null) => (v === null ? "–" : f.degrees(v));
+  return [
+    row("Band", (d) => `${d.inputs.bandName}, ${f.mhz(d.inputs.frequencyHz)}`),
+    row("Gain", (d) => f.gainDbi(d.figures.gainDbi)),
+    row("Gain, 5 % worst build", (d) => (d.tolerance.gainDbi.p5 === null ? "–" : f.gainDbi(d.tolerance.gainDbi.p5))),
+    row("SWR at the design frequency", (d) => f.swr(d.figures.swr)),
+    row("SWR < 2 bandwidth", (d) => f.bandwidth(d.sweep.swr2Span?.widthHz ?? null)),
+    row("Wire length", (d) => `${f.wavelengths(d.inputs.lengthWl)} · ${f.metres(d.inputs.lengthM)}`),
+    row("Pieces per arm", (d) => String(d.inputs.piecesPerArm)),
+    row("Span", (d) => f.span(d.shape.spanM)),
+    row("Feed variant", (d) => f.variantWords(d.inputs.variant)),
+    row("Radiation efficiency", (d) => f.percent(d.figures.radiationEfficiency)),
+    row("Front-to-back", (d) => `${f.fixed(d.figures.frontToBackDb, 1)} dB`),
+    row("Beamwidth along φ / θ", (d) => `${bw(d.figures.beamwidthAlongPhiDeg)} / ${bw(d.figures.beamwidthAlongThetaDeg)}`),
+    row("Bending tolerance", (d) => (d.tolerance.fragile ? "sensitive" : "forgiving")),
+  ];
+}
+
+/** Design ids from the compare page's address: at most three, no repeats, URL-safe only. */
+export function idsFromQuery(value: string | null): string[] {
+  if (!value) return [];
+  const out: string[] = [];
+  for (const id of value.split(",").map((s) => s.trim())) {
+    if (/^[a-z0-9][a-z0-9.-]*$/.test(id) && !out.includes(id)) out.push(id);
+    if (out.length === 3) break;
+  }
+  return out;
+}

@@ -1,0 +1,146 @@
+// The finder: a small JSON index with one record per buildable design, and the filter over it that
+// runs in the browser on every keystroke. Pure functions; the page script only wires them to the form.
+import type { Band } from "./catalog.js";
+import { isOk, type Entry } from "./ok.js";
+import { paths } from "./paths.js";
+
+export type Variant = "max-gain" | "direct-feed";
+
+export interface FinderRecord {
+  id: string;
+  band: string;
+  frequencyHz: number;
+  gainDbi: number;
+  lengthWl: number;
+  lengthM: number;
+  pieces: number;
+  spanXM: number;
+  spanYM: number;
+  /** Width of the SWR-below-limit span (Hz), 0 when there is none. */
+  swr2WidthHz: number;
+  variant: Variant;
+  /** Base-relative page and thumbnail paths. */
+  url: string;
+  thumb: string;
+}
+
+export interface FinderBand {
+  id: string;
+  name: string;
+  lowHz: number;
+  highHz: number;
+}
+
+export interface FinderIndex {
+  version: 1;
+  bands: FinderBand[];
+  designs: FinderRecord[];
+}
+
+export function finderIndex(bands: readonly Band[], entries: readonly Entry[]): FinderIndex {
+  return {
+    version: 1,
+    bands: bands.map((b) => ({ id: b.id, name: b.name, lowHz: b.lowHz, highHz: b.highHz })),
+    designs: entries.filter(isOk).map((e) => ({
+      id: e.id,
+      band: e.inputs.bandId,
+      frequencyHz: e.inputs.frequencyHz,
+      gainDbi: e.figures.gainDbi,
+      lengthWl: e.inputs.lengthWl,
+      lengthM: e.inputs.lengthM,
+      pieces: e.inputs.piecesPerArm,
+      spanXM: e.shape.spanM.x,
+      spanYM: e.shape.spanM.y,
+      swr2WidthHz: e.sweep.swr2Span?.widthHz ?? 0,
+      variant: e.inputs.variant,
+      url: paths.design(e.id),
+      thumb: paths.thumb(e.id),
+    })),
+  };
+}
+
+export const SORTS = ["gain", "span", "bandwidth", "length"] as const;
+export type SortKey = (typeof SORTS)[number];
+
+export interface FinderFilters {
+  band: string | null;
+  frequencyMhz: number | null;
+  minGainDbi: number | null;
+  maxSpanM: number | null;
+  pieces: number | null;
+  variant: Variant | null;
+  minBandwidthKhz: number | null;
+  sort: SortKey;
+}
+
+export const NO_FILTERS: FinderFilters = {
+  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, sort: "gain",
+};
+
+/** Query-string names of the filters (also the form field names). */
+export const PARAM = {
+  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", sort: "sort",
+} as const;
+
+const num = (text: string | null | undefined): number | null => {
+  if (text === null || text === undefined || text.trim() === "") return null;
+  const v = Number(text.trim().replace(",", "."));
+  return Number.isFinite(v) ? v : null;
+};
+
+/** Filters from form or query values; anything unreadable counts as "no filter". */
+export function parseFilters(get: (name: string) => string | null | undefined): FinderFilters {
+  const band = get(PARAM.band)?.trim() || null;
+  const variant = get(PARAM.variant);
+  const sort = get(PARAM.sort);
+  const pieces = num(get(PARAM.pieces));
+  return {
+    band,
+    frequencyMhz: num(get(PARAM.frequencyMhz)),
+    minGainDbi: num(get(PARAM.minGainDbi)),
+    maxSpanM: num(get(PARAM.maxSpanM)),
+    pieces: pieces !== null && Number.isInteger(pieces) ? pieces : null,
+    variant: variant === "max-gain" || variant === "direct-feed" ? variant : null,
+    minBandwidthKhz: num(get(PARAM.minBandwidthKhz)),
+    sort: (SORTS as readonly string[]).includes(sort ?? "") ? (sort as SortKey) : "gain",
+  };
+}
+
+/** The filters as query pairs, defaults left out (for a shareable URL). */
+export function filterParams(fl: FinderFilters): [string, string][] {
+  const out: [string, string][] = [];
+  for (const key of Object.keys(PARAM) as (keyof FinderFilters)[]) {
+    const v = fl[key];
+    if (v === null || (key === "sort" && v === "gain")) continue;
+    out.push([PARAM[key], String(v)]);
+  }
+  return out;
+}
+
+const ORDER: Record<SortKey, (a: FinderRecord, b: FinderRecord) => number> = {
+  gain: (a, b) => b.gainDbi - a.gainDbi,
+  span: (a, b) => Math.max(a.spanXM, a.spanYM) - Math.max(b.spanXM, b.spanYM),
+  bandwidth: (a, b) => b.swr2WidthHz - a.swr2WidthHz,
+  length: (a, b) => a.lengthWl - b.lengthWl,
+};
+
+/** The designs that pass every filter, in the chosen order (ties by id). */
+export function filterDesigns(index: FinderIndex, fl: FinderFilters): FinderRecord[] {
+  const bandEdges = new Map(index.bands.map((b) => [b.id, b]));
+  const hz = fl.frequencyMhz === null ? null : fl.frequencyMhz * 1e6;
+  const out = index.designs.filter((d) => {
+    if (fl.band !== null && d.band !== fl.band) return false;
+    if (hz !== null) {
+      const b = bandEdges.get(d.band);
+      if (!b || hz < b.lowHz || hz > b.highHz) return false;
+    }
+    if (fl.minGainDbi !== null && !(d.gainDbi >= fl.minGainDbi)) return false;
+    if (fl.maxSpanM !== null && !(Math.max(d.spanXM, d.spanYM) <= fl.maxSpanM)) return false;
+    if (fl.pieces !== null && d.pieces !== fl.pieces) return false;
+    if (fl.variant !== null && d.variant !== fl.variant) return false;
+    if (fl.minBandwidthKhz !== null && !(d.swr2WidthHz >= fl.minBandwidthKhz * 1e3)) return false;
+    return true;
+  });
+  const order = ORDER[fl.sort];
+  return out.sort((a, b) => order(a, b) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+}
