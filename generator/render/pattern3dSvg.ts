@@ -1,9 +1,11 @@
 // A static 3D view of the gain surface from the entry's θ–φ grid: each direction (θ, φ) is pushed
 // out to a radius proportional to the gain in dB above a floor of (peak − 30 dB), zero below it,
 // p = ρ (sin θ cos φ, sin θ sin φ, cos θ). The surface is a shaded quadrilateral mesh under an
-// orthographic (parallel) projection seen from an oblique direction above the x–y plane; faces
-// are painted far to near (painter's algorithm, depth = centroid · view direction) and shaded by
-// Lambert's cosine law |n·l|. The x/y/z axes and the wire (not to the pattern's scale) are on top.
+// orthographic (parallel) projection seen from an oblique direction above the x–y plane, screen
+// x = p·r̂, y = p·û with r̂ = ẑ × v̂ normalised and û = v̂ × r̂ (Foley, van Dam, Feiner & Hughes,
+// Computer Graphics: Principles and Practice, 2nd ed., §6.1–6.5). Faces are painted far to near
+// (painter's algorithm, Newell, Newell & Sancha 1972; depth = centroid · v̂) and shaded by
+// Lambert's cosine law |n̂·l̂|. The x/y/z axes and the wire (not to the pattern's scale) are on top.
 import type { Entry } from "../catalog/entrySchema.js";
 import { RAD_PER_DEG } from "../units.js";
 import { okParts } from "./entryParts.js";
@@ -63,7 +65,7 @@ export function pattern3dSvg(entry: Entry, opts: Pattern3dOptions = {}): string 
   const P: V3[][] = g.map((row, i) => row.map((v, j) => sph(i * dth * RAD_PER_DEG, j * dph * RAD_PER_DEG, level(v))));
 
   // Faces, far to near.
-  const faces: { depth: number; d: string; fill: string; stroke: string }[] = [];
+  const faces: { depth: number; d: string; fill: string }[] = [];
   for (let i = 0; i + 1 < rows; i++) for (let j = 0; j < cols; j++) {
     const k = (j + 1) % cols, q = [P[i][j], P[i][k], P[i + 1][k], P[i + 1][j]];
     const t = (level(g[i][j]) + level(g[i][k]) + level(g[i + 1][k]) + level(g[i + 1][j])) / 4;
@@ -71,12 +73,13 @@ export function pattern3dSvg(entry: Entry, opts: Pattern3dOptions = {}): string 
     const n = norm(cross([q[2][0] - q[0][0], q[2][1] - q[0][1], q[2][2] - q[0][2]], [q[3][0] - q[1][0], q[3][1] - q[1][1], q[3][2] - q[1][2]]));
     const c: V3 = [0, 1, 2].map((a) => (q[0][a] + q[1][a] + q[2][a] + q[3][a]) / 4) as V3;
     const lit = 0.72 + 0.28 * Math.abs(dot(n, LIGHT));
-    faces.push({ depth: dot(c, VIEW), d: points(q.map(project)), fill: levelColour(t, lit), stroke: levelColour(t, lit * 0.86) });
+    faces.push({ depth: dot(c, VIEW), d: points(q.map(project)), fill: levelColour(t, lit) });
   }
   faces.sort((a, b) => a.depth - b.depth);
   const body: string[] = [];
-  body.push(el("g", { "data-role": "surface", "stroke-width": 0.6, "stroke-linejoin": "round" },
-    faces.map((f) => el("polygon", { points: f.d, fill: f.fill, stroke: f.stroke })).join("")));
+  // One thin translucent stroke for every face: the mesh lines, and no hairline gaps between faces.
+  body.push(el("g", { "data-role": "surface", stroke: PALETTE.ink, "stroke-opacity": 0.16, "stroke-width": 0.6, "stroke-linejoin": "round" },
+    faces.map((f) => el("polygon", { points: f.d, fill: f.fill })).join("")));
 
   // The main-lobe arrow just outside the surface; painted under it when it points away from us.
   const pd = sph(figures.peakDirection.thetaDeg * RAD_PER_DEG, figures.peakDirection.phiDeg * RAD_PER_DEG, 1);

@@ -10,7 +10,7 @@ import { el, num, svgDoc, text, type Pt } from "./svg.js";
 
 export interface CutOptions { widthPx?: number }
 
-const W = 580, H = 600, CX = 290, CY = 268, R = 185, RANGE_DB = 30;
+const W = 580, H = 628, CX = 290, CY = 284, R = 185, RANGE_DB = 30;
 const HALO = { "paint-order": "stroke", stroke: PALETTE.paper, "stroke-width": 3, "stroke-linejoin": "round" };
 type V3 = [number, number, number];
 
@@ -18,12 +18,13 @@ const dir = (th: number, ph: number): V3 => [Math.sin(th) * Math.cos(ph), Math.s
 const at = (alphaDeg: number, r: number): Pt => [CX - r * Math.sin(alphaDeg * RAD_PER_DEG), CY - r * Math.cos(alphaDeg * RAD_PER_DEG)];
 const dbi = (v: number): string => `${v < 0 ? "\u2212" : ""}${Math.abs(v).toFixed(1)} dBi`;
 
-/** "+x" when the direction lies within 2° of an axis, else its θ and φ in degrees. */
-function directionWords(v: V3): string {
-  for (let i = 0; i < 3; i++) if (Math.abs(v[i]) > Math.cos(2 * RAD_PER_DEG)) return `${v[i] > 0 ? "+" : "−"}${"xyz"[i]}`;
+/** Where a direction points, in one or two short lines: an axis within 2°, else φ (in the
+ * x–y plane) or θ and φ, in degrees. */
+function directionWords(v: V3): string[] {
+  for (let i = 0; i < 3; i++) if (Math.abs(v[i]) > Math.cos(2 * RAD_PER_DEG)) return [`toward ${v[i] > 0 ? "+" : "−"}${"xyz"[i]}`];
   const th = Math.acos(Math.max(-1, Math.min(1, v[2]))) / RAD_PER_DEG;
-  const ph = ((Math.atan2(v[1], v[0]) / RAD_PER_DEG) + 360) % 360;
-  return `θ ${th.toFixed(0)}°, φ ${ph.toFixed(0)}°`;
+  const ph = (Math.round(Math.atan2(v[1], v[0]) / RAD_PER_DEG) + 360) % 360;
+  return Math.abs(th - 90) < 2 ? [`toward φ ${ph}°`] : ["toward", `θ ${th.toFixed(0)}°, φ ${ph}°`];
 }
 
 export function patternCutSvg(entry: Entry, which: "phi" | "theta", opts: CutOptions = {}): string {
@@ -69,7 +70,10 @@ export function patternCutSvg(entry: Entry, which: "phi" | "theta", opts: CutOpt
     const words = a === 0 ? "0° peak" : a === 180 ? "180°" : `${a > 0 ? "+" : "−"}${Math.abs(a)}°`;
     body.push(text(x, yb, words, { "font-size": FONT.label, fill: PALETTE.ink, "text-anchor": anchor, "font-weight": a === 0 ? 700 : undefined }));
     if (a === 0 || a === 90 || a === -90 || a === 180) {
-      body.push(text(x, yb + (c > 0.5 ? -15 : 15), `toward ${directionWords(along(a))}`, { "font-size": FONT.small, fill: PALETTE.inkSoft, "text-anchor": anchor }));
+      const dirWords = directionWords(along(a)), up = c > 0.5;
+      (up ? [...dirWords].reverse() : dirWords).forEach((w, j) => {
+        body.push(text(x, yb + (up ? -15 : 15) * (j + 1), w, { "font-size": FONT.small, fill: PALETTE.inkSoft, "text-anchor": anchor }));
+      });
     }
   }
   body.push(el("circle", { cx: pts[n / 2][0], cy: pts[n / 2][1], r: 4.5, fill: PALETTE.lobe, stroke: PALETTE.paper, "stroke-width": 1.5 }));
@@ -82,7 +86,7 @@ export function patternCutSvg(entry: Entry, which: "phi" | "theta", opts: CutOpt
     `Rings every 10 dB below the ${dbi(peak)} peak; 30 dB below it and less sits at the centre.`,
     `Half-power beamwidth: ${beam === null ? "none (gain stays within 3 dB)" : `${beam.toFixed(0)}°`}.`,
   ];
-  const capY = CY + R + 62;
+  const capY = CY + R + 82;
   body.push(text(20, 28, `Gain along ${hat} through the peak (dBi)`, { "font-size": FONT.heading, "font-weight": 700, fill: PALETTE.ink }));
   lines.forEach((l, i) => body.push(text(20, capY + i * 18, l, { "font-size": FONT.small, fill: PALETTE.inkSoft })));
   return svgDoc({

@@ -53,6 +53,7 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
   for (const p of P) b.add(p[0], p[1], 10 * k);
   for (let i = 0; i + 1 < n; i++) placer.blockSegment(P[i], P[i + 1], 4);
   const under: string[] = [], over: string[] = [], labels: Candidate[][] = [];
+  let tiltNote = "";
 
   // Main lobe.
   const th = figures.peakDirection.thetaDeg * RAD_PER_DEG, ph = figures.peakDirection.phiDeg * RAD_PER_DEG;
@@ -69,7 +70,7 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
   } else {
     const u = unit(Math.sin(th) * Math.cos(ph), -Math.sin(th) * Math.sin(ph));
     const tx = Math.abs(u[0]) > 1e-9 ? boxW / 2 / Math.abs(u[0]) : Infinity, ty = Math.abs(u[1]) > 1e-9 ? boxH / 2 / Math.abs(u[1]) : Infinity;
-    const t = Math.min(tx, ty) + 18 * k, len = dims ? 72 : 120, head = 15 * k;
+    const t = Math.min(tx, ty) + 34, len = dims ? 72 : 120, head = 15 * k;
     const s0: Pt = [cx + u[0] * t, cy + u[1] * t], s1: Pt = [s0[0] + u[0] * len, s0[1] + u[1] * len];
     const shaft: Pt = [s1[0] - u[0] * head * 0.8, s1[1] - u[1] * head * 0.8];
     over.push(el("g", { "data-role": "lobe-arrow" },
@@ -79,8 +80,8 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     placer.blockSegment(s0, s1, 6);
     if (dims) {
       const tilt = 90 - figures.peakDirection.thetaDeg;
-      const more = Math.abs(tilt) >= 3 ? `, tilted ${Math.abs(tilt).toFixed(0)}° ${tilt > 0 ? "toward you (+z)" : "away from you (−z)"}` : "";
-      labels.push(around(s1, [u, rot(u, 90), rot(u, -90)], 10, `main lobe (φ ${(Math.round(figures.peakDirection.phiDeg) % 360 + 360) % 360}°)${more}`));
+      if (Math.abs(tilt) >= 3) tiltNote = `Main lobe tilted ${Math.abs(tilt).toFixed(0)}° out of the page, ${tilt > 0 ? "toward you (+z)" : "away from you (−z)"}; the arrow shows its part in the page.`;
+      labels.push(around(s1, [u, rot(u, 90), rot(u, -90)], 10, `main lobe (φ ${(Math.round(figures.peakDirection.phiDeg) % 360 + 360) % 360}°)`));
     }
   }
 
@@ -93,7 +94,7 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     const mean: Pt = [P.reduce((s, p) => s + p[0], 0) / n, P.reduce((s, p) => s + p[1], 0) / n];
     const lens = shape.pointsM.slice(1).map((q, i) => { const m = shape.pointsM[i]; return Math.hypot(q[0] - m[0], q[1] - m[1], q[2] - m[2]); });
     const lu = pieceUnit(Math.max(...lens));
-    // Angles first (they sit at fixed points), then the feed word, then piece lengths.
+    const pieceLabels: Candidate[][] = [];
     let bends = 0;
     for (let i = 1; i + 1 < n; i++) {
       const back = unit(P[i - 1][0] - P[i][0], P[i - 1][1] - P[i][1]), fwd = unit(P[i + 1][0] - P[i][0], P[i + 1][1] - P[i][1]);
@@ -105,7 +106,7 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
         continue;
       }
       bends++;
-      const on: Pt = [-back[0], -back[1]], r = 18, ext: Pt = [P[i][0] + on[0] * (r + 8), P[i][1] + on[1] * (r + 8)];
+      const on: Pt = [-back[0], -back[1]], r = 24, ext: Pt = [P[i][0] + on[0] * (r + 8), P[i][1] + on[1] * (r + 8)];
       under.push(el("line", { x1: P[i][0], y1: P[i][1], x2: ext[0], y2: ext[1], stroke: PALETTE.gridStrong, "stroke-width": 1.2, "stroke-dasharray": "3 3" }));
       under.push(el("path", { d: arcPath(P[i], on, fwd, r), fill: "none", stroke: PALETTE.gridStrong, "stroke-width": 1.2 }));
       placer.blockSegment(P[i], ext, 1.5);
@@ -121,16 +122,17 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
       const mid: Pt = [(a[0] + c[0]) / 2, (a[1] + c[1]) / 2];
       if ((mid[0] - mean[0]) * nrm[0] + (mid[1] - mean[1]) * nrm[1] < 0) nrm = [-nrm[0], -nrm[1]];
       const cands: Candidate[] = [];
-      for (const f of [0.5, 0.35, 0.65, 0.2, 0.8]) for (const side of [1, -1]) for (const d of [9, 20]) {
+      for (const d of [9, 20, 34]) for (const f of [0.5, 0.35, 0.65, 0.2, 0.8]) for (const side of [1, -1]) {
         cands.push(labelAt([a[0] + (c[0] - a[0]) * f, a[1] + (c[1] - a[1]) * f], [nrm[0] * side, nrm[1] * side], d, lengthLabel(lens[i], lu), FONT.label));
       }
-      labels.push(cands);
+      pieceLabels.push(cands);
     }
-    for (const cands of labels) over.push(put(placer.place(cands), b));
+    // Piece lengths matter most to a builder: they choose their places first.
+    for (const cands of [...pieceLabels, ...labels]) over.push(put(placer.place(cands), b));
 
     // Scale bar and axes in a row under everything else, then the key to the angles.
     const barM = roundBarLengthM(0.3 * Math.max(maxX - minX, maxY - minY)), barPx = barM * pxPerM;
-    const y = b.maxY + 26, x0 = b.minX + 4;
+    const y = b.maxY + 36, x0 = b.minX + 4;
     const tick = (x: number) => el("line", { x1: x, y1: y - 5, x2: x, y2: y + 5, stroke: PALETTE.ink, "stroke-width": 1.5 });
     over.push(el("g", { "data-role": "scale-bar", "data-length-m": String(barM), "data-length-px": num(barPx, 3) },
       el("line", { x1: x0, y1: y, x2: x0 + barPx, y2: y, stroke: PALETTE.ink, "stroke-width": 2 }) + tick(x0) + tick(x0 + barPx) +
@@ -143,7 +145,7 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
       text(ax + al + 4, ay + 4, "x", { "font-size": FONT.small, fill: PALETTE.inkSoft }) +
       text(ax - 4, ay - al - 3, "y", { "font-size": FONT.small, fill: PALETTE.inkSoft, "text-anchor": "end" }));
     b.add(ax + al + 14, ay + 4).add(ax - 14, ay - al - 14);
-    const key = [...(bends ? ["Angle at a bend: how far the wire turns there (dashed: straight on)."] : []), "Angle at the feed: between the two arms."];
+    const key = [...(bends ? ["Angle at a bend: how far the wire turns there (dashed: straight on)."] : []), "Angle at the feed: between the two arms.", ...(tiltNote ? [tiltNote] : [])];
     key.forEach((line) => {
       const ky = b.maxY + 18; // b grows with each line, so the next goes below
       over.push(text(x0, ky, line, { "font-size": FONT.small, fill: PALETTE.inkSoft }));

@@ -10,7 +10,7 @@ import { PALETTE } from "./palette.js";
 import { shapeSvg } from "./shapeSvg.js";
 
 export const CARD_WIDTH_PX = 1200, CARD_HEIGHT_PX = 630;
-const IMAGE_BOX = { w: 500, h: 440 };
+const IMAGE_BOX = { w: 460, h: 440 };
 
 type Style = Record<string, string | number>;
 interface Node { type: string; props: { style?: Style; src?: string; width?: number; height?: number; children?: (Node | string)[] | Node | string } }
@@ -33,7 +33,7 @@ function loadFonts(): { name: string; data: Buffer; weight: 400 | 700; style: "n
 const wireLength = (m: number): string => (m >= 1 ? `${m.toFixed(2)} m` : `${(m * 100).toFixed(1)} cm`);
 
 function figure(value: string, label: string): Node {
-  return div({ flexDirection: "column", marginRight: 36 },
+  return div({ flexDirection: "column", marginRight: 30 },
     div({ fontSize: 40, fontWeight: 700, color: PALETTE.ink, whiteSpace: "nowrap" }, value),
     div({ fontSize: 22, color: PALETTE.inkSoft, marginTop: 2, whiteSpace: "nowrap" }, label));
 }
@@ -49,7 +49,7 @@ export async function shareCardSvg(entry: Entry): Promise<string> {
   const w = Math.min(IMAGE_BOX.w, IMAGE_BOX.h * aspect), h = w / aspect;
   const pieces = 2 * i.piecesPerArm;
   const tree = div({ width: CARD_WIDTH_PX - 112, height: CARD_HEIGHT_PX - 112, backgroundColor: PALETTE.paper, fontFamily: "Inter, Inter Greek", padding: 56, flexDirection: "row", justifyContent: "space-between" },
-    div({ flexDirection: "column", width: 520, justifyContent: "space-between" },
+    div({ flexDirection: "column", width: 550, justifyContent: "space-between" },
       div({ flexDirection: "column" },
         div({ fontSize: 24, fontWeight: 700, color: PALETTE.wire, letterSpacing: 1 }, "Bentwire Atlas"),
         div({ fontSize: 42, fontWeight: 700, color: PALETTE.ink, marginTop: 22, lineHeight: 1.15 }, entry.title),

@@ -6,7 +6,7 @@ import type { Entry } from "../catalog/entrySchema.js";
 import { mhz, okParts } from "./entryParts.js";
 import { FONT, PALETTE } from "./palette.js";
 import { gammaMagForSwr, gammaOf, reactanceArcPath, resistanceCircle, toXY, type Chart } from "./smithMath.js";
-import { el, num, points, svgDoc, text, type Pt } from "./svg.js";
+import { el, num, points, svgDoc, text, textWidth, type Pt } from "./svg.js";
 
 export interface SmithOptions { widthPx?: number }
 
@@ -57,12 +57,23 @@ export function smithSvg(entry: Entry, opts: SmithOptions = {}): string {
   if (inBand.length > 1) body.push(el("polyline", { "data-role": "locus-in-band", points: points(inBand), fill: "none", stroke: PALETTE.wire, "stroke-width": 4.5, "stroke-linejoin": "round", "stroke-linecap": "round" }));
   for (const p of all) body.push(el("circle", { cx: p[0], cy: p[1], r: 2.2, fill: PALETTE.wire }));
 
-  // Frequencies at the two ends of the sweep, pushed away from the chart centre.
-  const ends: [Pt, number][] = [[all[0], sweep.points[0].frequencyHz], [all[all.length - 1], sweep.points[all.length - 1].frequencyHz]];
-  for (const [p, f] of all.length ? ends : []) {
-    const dx = p[0] - CHART.cx, dy = p[1] - CHART.cy, l = Math.hypot(dx, dy) || 1;
-    const x = p[0] + (dx / l) * 10, y = p[1] + (dy / l) * 10 + 4;
-    body.push(text(x, y, `${mhz(f)} MHz`, { ...small, fill: PALETTE.ink, "text-anchor": dx >= 0 ? "start" : "end", ...HALO }));
+  // Frequencies at the two ends of the sweep, pushed away from the chart centre, kept inside the
+  // drawing and apart from each other.
+  if (all.length > 1) {
+    const ends = [0, all.length - 1].map((i) => {
+      const p = all[i], dx = p[0] - CHART.cx, dy = p[1] - CHART.cy, l = Math.hypot(dx, dy) || 1;
+      const words = `${mhz(sweep.points[i].frequencyHz)} MHz`, w = textWidth(words, FONT.small);
+      let x = p[0] + (dx / l) * 10, anchor: "start" | "end" = dx >= 0 ? "start" : "end";
+      if (anchor === "start" && x + w > W - 6) { x = p[0] - 10; anchor = "end"; }
+      if (anchor === "end" && x - w < 6) { x = p[0] + 10; anchor = "start"; }
+      return { x, y: p[1] + (dy / l) * 10 + 4, words, anchor };
+    });
+    if (Math.abs(ends[0].y - ends[1].y) < 14 && Math.abs(ends[0].x - ends[1].x) < 90) {
+      const [hi, lo] = ends[0].y <= ends[1].y ? [ends[0], ends[1]] : [ends[1], ends[0]];
+      const mid = (hi.y + lo.y) / 2;
+      hi.y = mid - 8; lo.y = mid + 8;
+    }
+    for (const e of ends) body.push(text(e.x, e.y, e.words, { ...small, fill: PALETTE.ink, "text-anchor": e.anchor, ...HALO }));
   }
   body.push(el("circle", { "data-role": "design-point", cx: design[0], cy: design[1], r: 6, fill: PALETTE.lobe, stroke: PALETTE.ink, "stroke-width": 1.5 }));
   const zin = figures.inputImpedanceOhm;

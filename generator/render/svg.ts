@@ -59,12 +59,6 @@ export function arrowHead(tip: Pt, u: Pt, size: number, fill: string): string {
   return el("polygon", { points: points([tip, [bx - uy * w, by + ux * w], [bx + uy * w, by - ux * w]]), fill });
 }
 
-/** Unicode minus for negative numbers in labels. */
-export const signed = (v: number, digits: number): string => {
-  const s = v.toFixed(digits);
-  return Number(s) === 0 ? (0).toFixed(digits) : s.replace("-", "\u2212");
-};
-
 /** Rough text width for layout (average glyph ≈ 0.6 em in a sans-serif face). */
 export const textWidth = (words: string, fontSize: number): number => words.length * fontSize * 0.6;
 

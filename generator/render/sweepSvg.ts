@@ -2,7 +2,7 @@
 // frequency axis in MHz: SWR on top (with the SWR = 2 line dashed), gain and realized gain in dBi
 // below. The band is shaded in both panels and the design frequency is a dotted line. Linear
 // scales and 1–2–5 ticks come from d3-scale.
-import { scaleLinear, type ScaleLinear } from "d3-scale";
+import { scaleLinear, scaleLog, type ScaleContinuousNumeric } from "d3-scale";
 import type { Entry } from "../catalog/entrySchema.js";
 import { mhz, okParts } from "./entryParts.js";
 import { FONT, PALETTE } from "./palette.js";
@@ -10,17 +10,19 @@ import { el, num, pathWithGaps, svgDoc, text, textWidth, type Pt } from "./svg.j
 
 export interface SweepOptions { widthPx?: number }
 
-const W = 640, H = 512, L = 66, RGT = 24;
+const W = 640, H = 526, L = 66, RGT = 24;
 const SWR_PANEL = { top: 96, height: 150 }, GAIN_PANEL = { top: 274, height: 150 };
-const SWR_CAP = 10;
+const SWR_CAP = 1000;
 const tickLabel = (v: number, step: number): string => {
   const s = v.toFixed(Math.max(0, -Math.floor(Math.log10(step) + 1e-9)));
   return Number(s) === 0 ? s.replace("-", "") : s.replace("-", "\u2212");
 };
 const small = { "font-size": FONT.small, fill: PALETTE.inkSoft };
 
-function yAxis(y: ScaleLinear<number, number>, x0: number, x1: number, count: number, title: string, panel: { top: number; height: number }): string {
-  const ticks = y.ticks(count), step = ticks.length > 1 ? ticks[1] - ticks[0] : 1, out: string[] = [];
+type Scale = ScaleContinuousNumeric<number, number>;
+
+function yAxis(y: Scale, ticks: number[], x0: number, x1: number, title: string, panel: { top: number; height: number }): string {
+  const step = ticks.length > 1 ? Math.min(...ticks.slice(1).map((v, i) => v - ticks[i])) : 1, out: string[] = [];
   for (const v of ticks) {
     out.push(el("line", { x1: x0, y1: y(v), x2: x1, y2: y(v), stroke: PALETTE.grid, "stroke-width": 1 }));
     out.push(text(x0 - 6, y(v) + 4, tickLabel(v, step), { ...small, "text-anchor": "end" }));
@@ -37,8 +39,12 @@ export function sweepSvg(entry: Entry, opts: SweepOptions = {}): string {
   const fMHz = pts.map((p) => p.frequencyHz / 1e6);
   const x = scaleLinear().domain([fMHz[0], fMHz[fMHz.length - 1]]).range([L, W - RGT]);
   const swrs = pts.flatMap((p) => (p.swr === null ? [] : [p.swr]));
-  const swrTop = Math.min(SWR_CAP, Math.max(3, Math.ceil(Math.max(1, ...swrs))));
-  const ySwr = scaleLinear().domain([1, swrTop]).range([SWR_PANEL.top + SWR_PANEL.height, SWR_PANEL.top]);
+  // SWR up to 6 on a linear axis; beyond that a log axis to the next decade (at most 1000).
+  const swrMax = Math.max(1, ...swrs), logSwr = swrMax > 6;
+  const swrTop = logSwr ? Math.min(SWR_CAP, 10 ** Math.ceil(Math.log10(swrMax) - 1e-9)) : Math.max(3, Math.ceil(swrMax));
+  const swrRange = [SWR_PANEL.top + SWR_PANEL.height, SWR_PANEL.top];
+  const ySwr: Scale = logSwr ? scaleLog().domain([1, swrTop]).range(swrRange) : scaleLinear().domain([1, swrTop]).range(swrRange);
+  const swrTicks = logSwr ? [1, 2, 5, 10, 20, 50, 100, 200, 500, 1000].filter((v) => v <= swrTop) : ySwr.ticks(5);
   const gains = pts.flatMap((p) => (p.realizedGainDbi === null ? [p.gainDbi] : [p.gainDbi, p.realizedGainDbi]));
   let lo = Math.min(...gains), hi = Math.max(...gains);
   if (hi - lo < 2) { const mid = (hi + lo) / 2; lo = mid - 1; hi = mid + 1; }
@@ -53,7 +59,7 @@ export function sweepSvg(entry: Entry, opts: SweepOptions = {}): string {
   for (const p of panels) body.push(el("line", { x1: fd, y1: p.top, x2: fd, y2: p.top + p.height, stroke: PALETTE.inkSoft, "stroke-width": 1.2, "stroke-dasharray": "2 3" }));
 
   // Axes and grids.
-  body.push(yAxis(ySwr, L, W - RGT, 5, "SWR", SWR_PANEL), yAxis(yGain, L, W - RGT, 4, "gain (dBi)", GAIN_PANEL));
+  body.push(yAxis(ySwr, swrTicks, L, W - RGT, logSwr ? "SWR (log scale)" : "SWR", SWR_PANEL), yAxis(yGain, yGain.ticks(4), L, W - RGT, "gain (dBi)", GAIN_PANEL));
   const xt = x.ticks(7), xStep = xt.length > 1 ? xt[1] - xt[0] : 1;
   const bottom = GAIN_PANEL.top + GAIN_PANEL.height;
   for (const v of xt) {
@@ -92,7 +98,8 @@ export function sweepSvg(entry: Entry, opts: SweepOptions = {}): string {
     body.push(el("g", { transform: `translate(${num(lx)} ${ly})` }, mark + text(32, 4, words, { "font-size": FONT.label, fill: PALETTE.ink })));
     lx += 32 + textWidth(words, FONT.label) + 22;
   });
-  const cap = `Shaded: ${entry.inputs.bandName}, ${mhz(entry.inputs.bandLowHz)}–${mhz(entry.inputs.bandHighHz)} MHz; design frequency ${mhz(entry.inputs.frequencyHz)} MHz.${clipped ? ` SWR above ${swrTop} is drawn at the top edge.` : ""}`;
-  body.push(text(20, H - 16, cap, { ...small }));
+  const cap = [`Shaded: ${entry.inputs.bandName}, ${mhz(entry.inputs.bandLowHz)}–${mhz(entry.inputs.bandHighHz)} MHz; design frequency ${mhz(entry.inputs.frequencyHz)} MHz.`];
+  if (clipped) cap.push(`SWR above ${swrTop} is drawn at the top edge.`);
+  cap.forEach((line, i) => body.push(text(20, H - 30 + i * 17, line, { ...small })));
   return svgDoc({ viewBox: [0, 0, W, H], widthPx: opts.widthPx ?? W, title: `SWR and gain across the sweep: ${entry.title}`, body: body.join("") });
 }
