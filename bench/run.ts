@@ -1,6 +1,7 @@
 // `npm run bench [-- --json] [-- --only solver|optimizer|analysis|catalog]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
+import { benchCatalog } from "./catalog.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchSolver } from "./solver.js";
 
@@ -8,7 +9,7 @@ const args = process.argv.slice(2);
 const json = args.includes("--json");
 const onlyAt = args.indexOf("--only");
 const only = onlyAt >= 0 ? args[onlyAt + 1] : undefined;
-const wants = (name: string) => !only || only === name;
+const wants = (name: string) => !only || only === name || (name === "catalog" && only === "catalog-full");
 
 const ms = (v: number) => v.toFixed(3);
 const out: Record<string, unknown> = {};
@@ -41,6 +42,17 @@ if (wants("analysis")) {
   const a = benchAnalysis();
   out.analysis = a;
   if (!json) console.log(`\nanalysis of a 1.5λ K = 3 design (sweep, match, 64-sample tolerance, convergence): median ${a.medianMs.toFixed(0)} ms of ${a.runs}`);
+}
+
+if (wants("catalog")) {
+  const c = await benchCatalog(only === "catalog-full");
+  out.catalog = c;
+  if (!json) {
+    console.log(`\ncatalog: ${c.smallGridEntries}-entry grid from scratch: 1 worker ${c.oneWorkerS.toFixed(1)} s, 2 workers ${c.twoWorkersS.toFixed(1)} s (speed-up ${c.speedup.toFixed(2)}×)`);
+    console.log(`  default grid with a warm cache: ${c.warmCacheS.toFixed(2)} s`);
+    console.log(`  1.5λ K = 3 in 3 bands: reference + polish ${c.referencePlusPolishS.toFixed(1)} s, full search per band ${c.searchPerBandS.toFixed(1)} s; polish gives up at most ${c.polishGainShortfallDb.toFixed(3)} dB`);
+    if (c.fullGridFromScratchS !== null) console.log(`  default grid from scratch, 2 workers: ${(c.fullGridFromScratchS / 60).toFixed(1)} min`);
+  }
 }
 
 if (json) console.log(JSON.stringify(out));

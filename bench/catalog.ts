@@ -1,0 +1,53 @@
+// Catalog timings: (1) a small grid from scratch with 1 and 2 workers (the speed-up); (2) the default
+// grid with every entry present (the warm cache); (3) what searching once in wavelength units and
+// polishing per band saves against a full search in every band; (4) optionally the whole default
+// grid from scratch (`--only catalog-full`, about ten minutes).
+import { mkdtempSync, readFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { computeReference, bandRequest } from "../generator/catalog/compute.js";
+import { generate } from "../generator/catalog/generate.js";
+import { expandGrid, parseGrid, type Grid } from "../generator/catalog/grid.js";
+import { designBentArm } from "../generator/design/designBentArm.js";
+
+const loadGrid = (path: string) => parseGrid(readFileSync(path, "utf8"), path);
+
+/** Five bands × (1.5λ, 2λ) × K = 2, 3 × max-gain: 20 entries, 4 reference searches of like cost. */
+function smallGrid(grid: Grid): Grid {
+  return { ...grid, bands: grid.bands.slice(0, 5), lengthsWl: [1.5, 2], piecesPerArm: [2, 3], variants: ["max-gain"] };
+}
+
+async function timeGenerate(grid: Grid, workers: number, outDir = mkdtempSync(join(tmpdir(), "bentwire-bench-"))): Promise<number> {
+  const report = await generate({ grid, outDir, workers });
+  return report.seconds;
+}
+
+export async function benchCatalog(full: boolean) {
+  const grid = loadGrid("designs/grid.yaml");
+  const small = smallGrid(grid);
+  const oneWorkerS = await timeGenerate(small, 1);
+  const twoWorkersS = await timeGenerate(small, 2);
+  const warmS = await timeGenerate(grid, 2, "designs/entries");
+  // reference + polish per band against a full search per band, for 1.5λ K = 3 max-gain in 3 bands
+  const cells = expandGrid(grid).filter((c) => c.lengthWl === 1.5 && c.piecesPerArm === 3 && c.variant === "max-gain").slice(0, 3);
+  let t0 = performance.now();
+  const reference = computeReference(grid, cells[0]);
+  const polished = cells.map((c) => designBentArm(bandRequest(grid, c), { start: reference.x }));
+  const sharedS = (performance.now() - t0) / 1000;
+  t0 = performance.now();
+  const searched = cells.map((c) => designBentArm(bandRequest(grid, c)));
+  const perBandS = (performance.now() - t0) / 1000;
+  const gainGapDb = Math.max(...cells.map((_, i) => (searched[i].evaluation.gainDbi ?? 0) - (polished[i].evaluation.gainDbi ?? 0)));
+  const fullS = full ? await timeGenerate(grid, 2) : null;
+  return {
+    smallGridEntries: expandGrid(small).length,
+    oneWorkerS,
+    twoWorkersS,
+    speedup: oneWorkerS / twoWorkersS,
+    warmCacheS: warmS,
+    referencePlusPolishS: sharedS,
+    searchPerBandS: perBandS,
+    polishGainShortfallDb: gainGapDb,
+    fullGridFromScratchS: fullS,
+  };
+}
