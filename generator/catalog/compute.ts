@@ -8,6 +8,7 @@
 import { analyzeDesign } from "../analysis/index.js";
 import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
+import { addPiece } from "../shapes/bentArm.js";
 import { parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { SOLVER_VERSION } from "../em/index.js";
 import { SPEED_OF_LIGHT_M_PER_S } from "../units.js";
@@ -55,11 +56,22 @@ export function referenceRequest(grid: Grid, k: ReferenceKey): DesignRequest {
   });
 }
 
-export const referenceHash = (grid: Grid, k: ReferenceKey): string =>
-  sha256(canonicalJson({ request: referenceRequest(grid, k), versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION } }));
+/** The reference one piece shorter per arm, which seeds this one's search (none for K = 1). */
+export const previousKey = (k: ReferenceKey): ReferenceKey | null => (k.piecesPerArm > 1 ? { ...k, piecesPerArm: k.piecesPerArm - 1 } : null);
 
-export function computeReference(grid: Grid, k: ReferenceKey): ReferenceResult {
-  const outcome = designBentArm(referenceRequest(grid, k));
+export function referenceHash(grid: Grid, k: ReferenceKey): string {
+  const prev = previousKey(k);
+  return sha256(canonicalJson({
+    request: referenceRequest(grid, k),
+    previous: prev ? referenceHash(grid, prev) : null,
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
+  }));
+}
+
+/** Searches in wavelength units, starting from the K − 1 result with its last piece split. */
+export function computeReference(grid: Grid, k: ReferenceKey, previous: ReferenceResult | null): ReferenceResult {
+  const request = referenceRequest(grid, k);
+  const outcome = previous ? designBentArm(request, { start: addPiece(previous.x, previous.piecesPerArm), polishOnly: false }) : designBentArm(request);
   return roundDeep({
     ...k,
     id: referenceId(k),

@@ -5,7 +5,7 @@
 import { cpus } from "node:os";
 import { Piscina } from "piscina";
 import { InputError } from "../errors.js";
-import { entryInputHash, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
+import { entryInputHash, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
 import type { Entry } from "./entrySchema.js";
 import { expandGrid, shardOf, type CellRequest, type Grid } from "./grid.js";
 import { readEntry, readReference, referenceDir, writeEntry, writeReference } from "./store.js";
@@ -61,15 +61,18 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
   const t0 = performance.now();
   const { cells, todo, recomputed } = await selectWork(o);
   const refDir = referenceDir(o.outDir);
+  // every reference the missing entries need, and the chain of shorter ones each starts from
   const keys = new Map<string, ReferenceKey>();
-  for (const c of todo) keys.set(referenceId(keyOf(c)), keyOf(c));
-  const needRefs: ReferenceKey[] = [];
-  const refs = new Map<string, Promise<ReferenceResult>>();
-  for (const [id, key] of keys) {
-    const stored = await readReference(refDir, id, referenceHash(o.grid, key));
-    if (stored) refs.set(id, Promise.resolve(stored));
-    else needRefs.push(key);
+  for (const c of todo) {
+    for (let k: ReferenceKey | null = keyOf(c); k; k = previousKey(k)) keys.set(referenceId(k), k);
   }
+  const stored = new Map<string, ReferenceResult>();
+  for (const [id, key] of keys) {
+    const found = await readReference(refDir, id, referenceHash(o.grid, key));
+    if (found) stored.set(id, found);
+  }
+  const needRefs = [...keys.values()].filter((k) => !stored.has(referenceId(k)));
+  const refs = new Map<string, Promise<ReferenceResult>>();
   const total = todo.length + needRefs.length;
   let done = 0;
   let infeasible = 0;
@@ -80,16 +83,23 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
   const execArgv = process.execArgv.some((a) => a.includes("tsx")) ? process.execArgv : [...process.execArgv, "--import", "tsx"];
   const pool = new Piscina({ filename: new URL("./worker.ts", import.meta.url).href, minThreads: workers, maxThreads: workers, idleTimeout: 1000, execArgv });
   try {
-    for (const key of needRefs) {
+    const referenceOf = (key: ReferenceKey): Promise<ReferenceResult> => {
       const id = referenceId(key);
-      refs.set(id, (pool.run({ kind: "reference", grid: o.grid, key } satisfies Task) as Promise<ReferenceResult>).then(async (r) => {
-        await writeReference(refDir, r);
-        tick(id);
-        return r;
-      }));
-    }
+      if (!refs.has(id)) {
+        const have = stored.get(id);
+        const prev = previousKey(key);
+        refs.set(id, have ? Promise.resolve(have) : (async () => {
+          const previous = prev ? await referenceOf(prev) : null;
+          const r = (await pool.run({ kind: "reference", grid: o.grid, key, previous } satisfies Task)) as ReferenceResult;
+          await writeReference(refDir, r);
+          tick(id);
+          return r;
+        })());
+      }
+      return refs.get(id)!;
+    };
     await Promise.all(todo.map(async (cell) => {
-      const reference = await refs.get(referenceId(keyOf(cell)))!;
+      const reference = await referenceOf(keyOf(cell));
       const entry = (await pool.run({ kind: "entry", grid: o.grid, cell, reference } satisfies Task)) as Entry;
       await writeEntry(o.outDir, entry);
       if (entry.status !== "ok") infeasible++;

@@ -1,6 +1,6 @@
 // `verify`: every entry in the folder must pass its schema and content hash and carry the input
 // hash its grid cell expects; a seeded sample is recomputed and must come out byte for byte the same.
-import { computeEntry, computeReference, entryInputHash, referenceHash, referenceId } from "./compute.js";
+import { computeEntry, computeReference, entryInputHash, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
 import { expandGrid, type Grid } from "./grid.js";
 import { createRng } from "../optimize/rng.js";
 import { checkEntryText, entryFile, listJson, readReference, referenceDir, serialize } from "./store.js";
@@ -11,6 +11,14 @@ export interface VerifyReport {
   problems: string[];
   missing: string[];
   recomputed: string[];
+}
+
+/** A stored reference, or the chain of searches that makes it. */
+async function referenceFor(grid: Grid, dir: string, key: ReferenceKey): Promise<ReferenceResult> {
+  const stored = await readReference(referenceDir(dir), referenceId(key), referenceHash(grid, key));
+  if (stored) return stored;
+  const prev = previousKey(key);
+  return computeReference(grid, key, prev ? await referenceFor(grid, dir, prev) : null);
 }
 
 export async function verifyCatalog(grid: Grid, dir: string, sample: number, seed = 1): Promise<VerifyReport> {
@@ -42,7 +50,7 @@ export async function verifyCatalog(grid: Grid, dir: string, sample: number, see
   for (const id of picked) {
     const cell = cells.get(id)!;
     const key = { lengthWl: cell.lengthWl, piecesPerArm: cell.piecesPerArm, variant: cell.variant };
-    const reference = (await readReference(referenceDir(dir), referenceId(key), referenceHash(grid, key))) ?? computeReference(grid, key);
+    const reference = await referenceFor(grid, dir, key);
     const again = serialize(computeEntry(grid, cell, reference));
     const stored = await readFile(entryFile(dir, id), "utf8");
     if (again !== stored) problems.push(`${id}: recomputing it gives different bytes`);

@@ -4,9 +4,9 @@ import { computeEntry, computeReference, type ReferenceKey, type ReferenceResult
 import type { CellRequest, Grid } from "./grid.js";
 
 export type Task =
-  | { kind: "reference"; grid: Grid; key: ReferenceKey }
+  | { kind: "reference"; grid: Grid; key: ReferenceKey; previous: ReferenceResult | null }
   | { kind: "entry"; grid: Grid; cell: CellRequest; reference: ReferenceResult };
 
 export default function run(task: Task) {
-  return task.kind === "reference" ? computeReference(task.grid, task.key) : computeEntry(task.grid, task.cell, task.reference);
+  return task.kind === "reference" ? computeReference(task.grid, task.key, task.previous) : computeEntry(task.grid, task.cell, task.reference);
 }

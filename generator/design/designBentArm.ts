@@ -4,7 +4,8 @@
 // returned with status "infeasible" and the reasons. For direct-feed designs the search checks SWR
 // at the band edges and centre against 97.5 % of the limit, the polish at all 11 against the limit itself.
 // `start` skips the search and only polishes (a shape found in wavelength units, re-used per band);
-// with `polishOnly: false` it is the search's starting point instead of the box centre.
+// with `polishOnly: false` it is the search's starting point instead of the box centre, and the
+// polish begins from whichever of it and the search's best scores better.
 import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
 import { parameterBounds } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
@@ -58,6 +59,8 @@ export function designBentArm(
   let history: HistoryEntry[] = [];
   let searchEvaluations = 0;
   if (!polishOnly) {
+    // a given start point competes with the search's best: the search never ends worse than it
+    const startScore = options.start ? score(z0, searchFrequencies, r.swrLimit * 0.975) : Infinity;
     const ipop = createIpop({
       x0: z0,
       sigma0: 0.25,
@@ -74,7 +77,7 @@ export function designBentArm(
       ipop.tell(zs, zs.map((z) => score(z, searchFrequencies, r.swrLimit * 0.975)));
     }
     const result = ipop.result();
-    z0 = result.x;
+    if (result.f <= startScore) z0 = result.x;
     stopReasons = result.stopReasons;
     history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
     searchEvaluations = result.evaluations;

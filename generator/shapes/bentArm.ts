@@ -104,3 +104,13 @@ export function fromShape(shape: Shape): { params: BentArmParameters; spec: Bent
     spec: { piecesPerArm: k, wireLengthM: 2 * half },
   };
 }
+
+/**
+ * The same shape with one more piece per arm: the last piece split in two equal halves with a 0°
+ * bend between them. A search for K + 1 pieces started here can only improve on K.
+ */
+export function addPiece(x: readonly number[], piecesPerArm: number): number[] {
+  const p = unpack(x, piecesPerArm);
+  const last = 1 - p.pieceFractions.reduce((s, u) => s + u, 0);
+  return pack({ firstAngleRad: p.firstAngleRad, bendAnglesRad: [...p.bendAnglesRad, 0], pieceFractions: [...p.pieceFractions, last / 2] });
+}

@@ -26,10 +26,12 @@ export function overlayPolarSvg(series: readonly PolarSeries[], title: string, s
   const top = Math.ceil(all.length ? Math.max(...all) : 0);
   const floor = top - RANGE_DB;
   const radius = (g: number) => (Math.max(g, floor) - floor) / RANGE_DB * rMax;
+  // ring labels sit along a spoke 75° clockwise from the top, clear of the lobe label
+  const labelAngle = (75 * Math.PI) / 180;
   const rings = [0, 10, 20, 30].map((d) => {
     const r = radius(top - d);
-    return `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(r)}" class="ring"/>` +
-      `<text x="${n(cx + 3)}" y="${n(cy - r - 2)}" class="ringlabel">${escapeText(f.fixed(top - d, 0))} dBi</text>`;
+    const label = d === 30 ? "" : `<text x="${n(cx + r * Math.sin(labelAngle) + 3)}" y="${n(cy - r * Math.cos(labelAngle) - 3)}" class="ringlabel">${escapeText(f.fixed(top - d, 0))} dBi</text>`;
+    return `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(r)}" class="ring"/>` + label;
   }).join("");
   const spokes = Array.from({ length: 12 }, (_, i) => {
     const a = (i * 30 * Math.PI) / 180;

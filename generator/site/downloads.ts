@@ -2,11 +2,27 @@
 // a shape file that `bentwire analyze` reads back, node coordinates (CSV), a DXF polyline for a jig,
 // 1:1 bending templates tiled over A4 and Letter, and a checksum list over all of them.
 import { serialize } from "../catalog/store.js";
-import { bendingTemplateSvgs, nodesCsv, sha256Listing, wireDxf, type ExportShape, type PaperName } from "../export/index.js";
+import { bendingTemplateSvgs, nodesCsv, planBendingTemplate, sha256Listing, wireDxf, type ExportShape, type PaperName } from "../export/index.js";
 import { isOk, type Entry, type OkEntry } from "./ok.js";
+
+export type DownloadGroup = "entry" | "shape" | "nodes" | "dxf" | "template-a4" | "template-letter" | "checksums";
+
+export interface TemplateSheet {
+  paper: PaperName;
+  /** 0-based place in the full tiling grid, and the grid's size. */
+  row: number;
+  column: number;
+  rows: number;
+  columns: number;
+  /** "R1 C2", as printed on the sheet. */
+  label: string;
+}
 
 export interface DownloadFile {
   name: string;
+  group: DownloadGroup;
+  /** Set for the sheets of a bending template. */
+  sheet?: TemplateSheet;
   /** What the file is, for the download list. */
   label: string;
   mediaType: string;
@@ -39,38 +55,47 @@ export function exportShapeOf(entry: OkEntry): ExportShape {
 }
 
 export const CHECKSUM_FILE = "SHA256SUMS";
-const PAPERS: { paper: PaperName; label: string }[] = [
+export const PAPERS: { paper: PaperName; label: string }[] = [
   { paper: "a4", label: "A4" },
-  { paper: "letter", label: "Letter" },
+  { paper: "letter", label: "US Letter" },
 ];
 
 function templateFiles(entry: OkEntry, shape: ExportShape): DownloadFile[] {
   return PAPERS.flatMap(({ paper, label }) => {
+    const plan = planBendingTemplate(shape, { paper });
     const pages = bendingTemplateSvgs(shape, { paper });
-    return pages.map((svg, i) => ({
-      name: pages.length === 1 ? `${entry.id}.template-${paper}.svg` : `${entry.id}.template-${paper}-page${i + 1}.svg`,
-      label: pages.length === 1 ? `1:1 bending template, one ${label} page` : `1:1 bending template, ${label} page ${i + 1} of ${pages.length}`,
-      mediaType: "image/svg+xml",
-      content: svg,
-    }));
+    if (pages.length !== plan.pages.length) throw new Error(`site downloads: ${entry.id}: template plan and pages disagree`);
+    return pages.map((svg, i): DownloadFile => {
+      const p = plan.pages[i];
+      const single = pages.length === 1;
+      return {
+        group: `template-${paper}`,
+        name: single ? `${entry.id}.template-${paper}.svg` : `${entry.id}.template-${paper}-r${p.row + 1}c${p.column + 1}.svg`,
+        label: single ? `1:1 bending template, one ${label} sheet` : `1:1 bending template, ${label} sheet ${p.label}`,
+        mediaType: "image/svg+xml",
+        content: svg,
+        sheet: { paper, row: p.row, column: p.column, rows: plan.rows, columns: plan.columns, label: p.label },
+      };
+    });
   });
 }
 
 /** Every download of a design, the checksum list last. Infeasible entries get their JSON only. */
 export function downloadFiles(entry: Entry): DownloadFile[] {
   const files: DownloadFile[] = [
-    { name: `${entry.id}.json`, label: "catalog entry (JSON, every figure)", mediaType: "application/json", content: serialize(entry) },
+    { group: "entry", name: `${entry.id}.json`, label: "catalog entry (JSON, every figure)", mediaType: "application/json", content: serialize(entry) },
   ];
   if (isOk(entry)) {
     const shape = exportShapeOf(entry);
     files.push(
-      { name: `${entry.id}.shape.json`, label: "shape file (loads into bentwire analyze)", mediaType: "application/json", content: `${JSON.stringify(shapeFileOf(entry), null, 2)}\n` },
-      { name: `${entry.id}.nodes.csv`, label: "node coordinates (CSV, metres and inches)", mediaType: "text/csv", content: nodesCsv(shape) },
-      { name: `${entry.id}.dxf`, label: "polyline for jig cutting (DXF, millimetres)", mediaType: "application/dxf", content: wireDxf(shape) },
+      { group: "shape", name: `${entry.id}.shape.json`, label: "shape file (loads into bentwire analyze)", mediaType: "application/json", content: `${JSON.stringify(shapeFileOf(entry), null, 2)}\n` },
+      { group: "nodes", name: `${entry.id}.nodes.csv`, label: "node coordinates (CSV, metres and inches)", mediaType: "text/csv", content: nodesCsv(shape) },
+      { group: "dxf", name: `${entry.id}.dxf`, label: "polyline for jig cutting (DXF, millimetres)", mediaType: "application/dxf", content: wireDxf(shape) },
       ...templateFiles(entry, shape),
     );
   }
   files.push({
+    group: "checksums",
     name: CHECKSUM_FILE,
     label: "SHA-256 checksums of the files above",
     mediaType: "text/plain",
@@ -84,4 +109,71 @@ export function allChecksums(entries: readonly Entry[], filePath: (id: string, n
   return sha256Listing(
     entries.flatMap((e) => downloadFiles(e).filter((f) => f.name !== CHECKSUM_FILE).map((f) => ({ name: filePath(e.id, f.name), content: f.content }))),
   );
+}
+
+const GROUP_LABELS: Record<DownloadGroup, string> = {
+  entry: "Catalog entry (JSON, every figure)",
+  shape: "Shape file (loads into bentwire analyze)",
+  nodes: "Node coordinates (CSV, metres and inches)",
+  dxf: "Wire polyline for jig cutting (DXF, millimetres)",
+  "template-a4": "1:1 bending template, A4",
+  "template-letter": "1:1 bending template, US Letter",
+  checksums: "SHA-256 checksums of all files above",
+};
+
+export interface DownloadRow {
+  group: DownloadGroup;
+  label: string;
+  files: { name: string; linkText: string; bytes: number }[];
+  bytes: number;
+  /** For a template tiled over several sheets: its paper (the site adds a sheet map page). */
+  tiledPaper: PaperName | null;
+}
+
+/** Tiled templates with more sheets than this are linked through their sheet map only. */
+export const INLINE_SHEETS = 24;
+
+/** The download list as the page shows it: one row per kind, template sheets side by side. */
+export function downloadRows(files: readonly DownloadFile[]): DownloadRow[] {
+  const rows: DownloadRow[] = [];
+  for (const f of files) {
+    let row = rows.find((r) => r.group === f.group);
+    if (!row) {
+      row = { group: f.group, label: GROUP_LABELS[f.group], files: [], bytes: 0, tiledPaper: null };
+      rows.push(row);
+    }
+    const bytes = Buffer.byteLength(f.content, "utf8");
+    row.files.push({ name: f.name, linkText: f.sheet && f.sheet.rows * f.sheet.columns > 1 ? f.sheet.label : f.name, bytes });
+    row.bytes += bytes;
+    if (f.sheet && f.sheet.rows * f.sheet.columns > 1) row.tiledPaper = f.sheet.paper;
+  }
+  for (const r of rows) {
+    if (!r.group.startsWith("template-")) continue;
+    if (r.tiledPaper === null) r.label += ", one sheet";
+    else r.label += `, ${r.files.length} sheets to tape together`;
+  }
+  return rows;
+}
+
+export interface SheetMap {
+  paper: PaperName;
+  paperLabel: string;
+  rows: number;
+  columns: number;
+  /** Row-major grid; null where the sheet would be blank and is left out. */
+  cells: ({ name: string; label: string; bytes: number } | null)[][];
+}
+
+/** The sheets of a tiled template laid out as they go together, for the sheet map page. */
+export function sheetMaps(files: readonly DownloadFile[]): SheetMap[] {
+  const maps: SheetMap[] = [];
+  for (const { paper, label } of PAPERS) {
+    const sheets = files.filter((f) => f.sheet?.paper === paper);
+    if (sheets.length === 0 || sheets[0].sheet!.rows * sheets[0].sheet!.columns === 1) continue;
+    const { rows, columns } = sheets[0].sheet!;
+    const cells: SheetMap["cells"] = Array.from({ length: rows }, () => Array.from({ length: columns }, () => null));
+    for (const f of sheets) cells[f.sheet!.row][f.sheet!.column] = { name: f.name, label: f.sheet!.label, bytes: Buffer.byteLength(f.content, "utf8") };
+    maps.push({ paper, paperLabel: label, rows, columns, cells });
+  }
+  return maps;
 }

@@ -79,10 +79,11 @@ export const mhz = (hz: number): string => `${trimZeros(fixed(hz / 1e6, DISPLAY.
 export const bandEdges = (lowHz: number, highHz: number): string =>
   `${trimZeros(fixed(lowHz / 1e6, DISPLAY.mhz))}–${trimZeros(fixed(highHz / 1e6, DISPLAY.mhz))} MHz`;
 
-/** A bandwidth: kHz (whole) below 10 MHz, MHz with two decimals above. */
+/** A bandwidth: whole kHz below 1 MHz, MHz with three decimals below 10 MHz, two above. */
 export function bandwidth(hz: number | null): string {
-  if (hz === null) return "none";
-  return hz < 10e6 ? `${fixed(hz / 1e3, DISPLAY.khz)} kHz` : `${fixed(hz / 1e6, DISPLAY.wideMhz)} MHz`;
+  if (hz === null || hz <= 0) return "none";
+  if (hz < 1e6) return `${fixed(hz / 1e3, DISPLAY.khz)} kHz`;
+  return `${fixed(hz / 1e6, hz < 10e6 ? DISPLAY.mhz : DISPLAY.wideMhz)} MHz`;
 }
 
 /** A complex impedance: "96.8 − j12.6 Ω". */

@@ -25,6 +25,7 @@ export const paths = {
   thumb: (id: string) => `designs/${id}/thumb.png`,
   card: (id: string) => `designs/${id}/card.png`,
   file: (id: string, name: string) => `designs/${id}/files/${name}`,
+  sheets: (id: string, paper: string) => `designs/${id}/template-${paper}/`,
   finder: "finder/",
   finderIndex: "finder/index.json",
   compare: (ids: readonly string[] = []) => (ids.length ? `compare/?ids=${ids.map(encodeURIComponent).join(",")}` : "compare/"),

@@ -41,7 +41,13 @@ export function bandwidthShown(e: OkEntry): Shown {
   const span = e.sweep.swr2Span;
   if (span === null) return plain("none");
   const text = f.bandwidth(span.widthHz);
-  return shown(text, "sweep.swr2Span.widthHz", text.endsWith("kHz") ? "kHz" : "MHz");
+  return shown(span.touchesSweepEdge ? `≥ ${text}` : text, "sweep.swr2Span.widthHz", text.endsWith("kHz") ? "kHz" : "MHz");
+}
+
+/** A design's title without its band name in front (for lists inside one band). */
+export function shortTitle(e: Entry): string {
+  const prefix = `${e.inputs.bandName}: `;
+  return e.title.startsWith(prefix) ? e.title.slice(prefix.length) : e.title;
 }
 
 export function bandRow(e: Entry): BandRow {
@@ -54,11 +60,11 @@ export function bandRow(e: Entry): BandRow {
   const variant: BandCell = { parts: [plain(f.variantShort(i.variant))], sort: i.variant };
   if (!isOk(e)) {
     const none: BandCell = { parts: [plain("–")], sort: -Infinity };
-    return { id: e.id, title: e.title, ok: false, message: e.message, cells: { gain: none, length, pieces, span: none, bandwidth: none, variant } };
+    return { id: e.id, title: shortTitle(e), ok: false, message: e.message, cells: { gain: none, length, pieces, span: none, bandwidth: none, variant } };
   }
   return {
     id: e.id,
-    title: e.title,
+    title: shortTitle(e),
     ok: true,
     message: e.message,
     cells: {
@@ -96,6 +102,7 @@ export function keyFigures(e: OkEntry): Row[] {
       parts: span
         ? [shown(f.mhz(span.lowHz), "sweep.swr2Span.lowHz", "MHz"), plain(" to "), shown(f.mhz(span.highHz), "sweep.swr2Span.highHz", "MHz"), plain(" ("), bandwidthShown(e), plain(")")]
         : [plain("nowhere in the sweep without a match")],
+      note: span?.touchesSweepEdge ? "at least: the span reaches the edge of the computed sweep" : undefined,
     },
     {
       label: "Main lobe toward",

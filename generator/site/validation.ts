@@ -2,11 +2,11 @@
 import type { ReferenceCheck } from "../validation/referenceChecks.js";
 import * as f from "./format.js";
 
-/** Decimals for a check's values: enough to show the deviation against its tolerance. */
-export function checkDecimals(c: Pick<ReferenceCheck, "unit" | "reference" | "tolerance">): number {
-  const scale = Math.min(Math.abs(c.reference) || 1, c.tolerance || 1);
+/** Decimals for a check's values: one digit finer than its tolerance (dBi always two). */
+export function checkDecimals(c: Pick<ReferenceCheck, "unit" | "tolerance">): number {
   if (c.unit === "dBi") return 2;
-  return scale < 0.01 ? 5 : scale < 0.1 ? 4 : scale < 1 ? 3 : scale < 10 ? 2 : 1;
+  if (!(c.tolerance > 0)) return 2;
+  return Math.min(6, Math.max(0, Math.ceil(-Math.log10(c.tolerance))) + 1);
 }
 
 export interface ValidationRow {
