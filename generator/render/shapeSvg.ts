@@ -2,7 +2,8 @@
 // axes. With dimensions it adds piece lengths, the turn at each bend (drawn from the dashed
 // straight-on direction), the angle between the arms at the feed, a scale bar and small x/y axes;
 // labels are placed clear of the wire and of each other (labelPlacer.ts). The main lobe is an
-// arrow along the peak direction projected onto the x–y plane, (sin θ cos φ, sin θ sin φ); when
+// arrow along the peak direction projected onto the x–y plane, (sin θ cos φ, sin θ sin φ), with its
+// mirror twin when it is off the symmetry axis (the shape is symmetric about x = 0); when
 // |cos θ| > 0.7 the lobe leaves the plane and a circled dot (toward the viewer, +z) or circled
 // cross (away, −z) is drawn instead.
 import type { Entry } from "../catalog/entrySchema.js";
@@ -68,21 +69,28 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     placer.blockBox({ x0: s[0] - r, y0: s[1] - r, x1: s[0] + r, y1: s[1] + r });
     if (dims) labels.push([labelAt([s[0] + r, s[1]], [1, 0], 8, `main lobe out of the page, ${toward ? "toward you (+z)" : "away from you (−z)"}`, FONT.caption)]);
   } else {
-    const u = unit(Math.sin(th) * Math.cos(ph), -Math.sin(th) * Math.sin(ph));
-    const tx = Math.abs(u[0]) > 1e-9 ? boxW / 2 / Math.abs(u[0]) : Infinity, ty = Math.abs(u[1]) > 1e-9 ? boxH / 2 / Math.abs(u[1]) : Infinity;
-    const t = Math.min(tx, ty) + 34, len = dims ? 72 : 120, head = 15 * k;
-    const s0: Pt = [cx + u[0] * t, cy + u[1] * t], s1: Pt = [s0[0] + u[0] * len, s0[1] + u[1] * len];
-    const shaft: Pt = [s1[0] - u[0] * head * 0.8, s1[1] - u[1] * head * 0.8];
-    over.push(el("g", { "data-role": "lobe-arrow" },
-      el("line", { x1: s0[0], y1: s0[1], x2: shaft[0], y2: shaft[1], stroke: PALETTE.lobe, "stroke-width": 3.2 * k, "stroke-linecap": "round" }) +
-      arrowHead(s1, u, head, PALETTE.lobe)));
-    b.add(s0[0], s0[1], 4).add(s1[0], s1[1], 4);
-    placer.blockSegment(s0, s1, 6);
-    if (dims) {
-      const tilt = 90 - figures.peakDirection.thetaDeg;
-      if (Math.abs(tilt) >= 3) tiltNote = `Main lobe tilted ${Math.abs(tilt).toFixed(0)}° out of the page, ${tilt > 0 ? "toward you (+z)" : "away from you (−z)"}; the arrow shows its part in the page.`;
-      labels.push(around(s1, [u, rot(u, 90), rot(u, -90)], 10, `main lobe (φ ${(Math.round(figures.peakDirection.phiDeg) % 360 + 360) % 360}°)`));
-    }
+    const u0 = unit(Math.sin(th) * Math.cos(ph), -Math.sin(th) * Math.sin(ph));
+    // the shape is mirror-symmetric about the y axis, so a lobe off that axis has a twin
+    const twins: Pt[] = Math.abs(u0[0]) > 0.05 ? [u0, [-u0[0], u0[1]]] : [u0];
+    const len = dims ? 72 : 120, head = 15 * k;
+    twins.forEach((u, i) => {
+      const tx = Math.abs(u[0]) > 1e-9 ? boxW / 2 / Math.abs(u[0]) : Infinity, ty = Math.abs(u[1]) > 1e-9 ? boxH / 2 / Math.abs(u[1]) : Infinity;
+      const t = Math.min(tx, ty) + 34;
+      const s0: Pt = [cx + u[0] * t, cy + u[1] * t], s1: Pt = [s0[0] + u[0] * len, s0[1] + u[1] * len];
+      const shaft: Pt = [s1[0] - u[0] * head * 0.8, s1[1] - u[1] * head * 0.8];
+      over.push(el("g", { "data-role": i === 0 ? "lobe-arrow" : "lobe-arrow-twin" },
+        el("line", { x1: s0[0], y1: s0[1], x2: shaft[0], y2: shaft[1], stroke: PALETTE.lobe, "stroke-width": 3.2 * k, "stroke-linecap": "round" }) +
+        arrowHead(s1, u, head, PALETTE.lobe)));
+      b.add(s0[0], s0[1], 4).add(s1[0], s1[1], 4);
+      placer.blockSegment(s0, s1, 6);
+      if (dims && i === 0) {
+        const tilt = 90 - figures.peakDirection.thetaDeg;
+        if (Math.abs(tilt) >= 3) tiltNote = `Main lobe tilted ${Math.abs(tilt).toFixed(0)}° out of the page, ${tilt > 0 ? "toward you (+z)" : "away from you (−z)"}; the arrow shows its part in the page.`;
+        const phi = (Math.round(figures.peakDirection.phiDeg) % 360 + 360) % 360;
+        const words = twins.length > 1 ? `main lobes (φ ${phi}° and ${(540 - phi) % 360}°, mirror twins)` : `main lobe (φ ${phi}°)`;
+        labels.push(around(s1, [u, rot(u, 90), rot(u, -90)], 10, words));
+      }
+    });
   }
 
   // The wire and the feed.
