@@ -4,8 +4,8 @@
 // returned with status "infeasible" and the reasons. For direct-feed designs the search checks SWR
 // at the band edges and centre against 97.5 % of the limit, the polish at all 11 against the limit itself.
 // `start` skips the search and only polishes (a shape found in wavelength units, re-used per band);
-// with `polishOnly: false` it is the search's starting point instead of the box centre, and the
-// polish begins from whichever of it and the search's best scores better.
+// with `polishOnly: false` the search runs from the box centre as usual and the polish begins from
+// whichever of `start` and the search's best scores better.
 import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
 import { parameterBounds } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
@@ -53,14 +53,16 @@ export function designBentArm(
   };
 
   const clamp01 = (v: number) => Math.min(1, Math.max(0, v));
-  let z0 = options.start ? toZ(options.start).map(clamp01) : new Array(n).fill(0.5);
   const polishOnly = options.start !== undefined && options.polishOnly !== false;
+  const zStart = options.start ? toZ(options.start).map(clamp01) : null;
+  // the search starts at the box centre; a given start point competes with its best
+  let z0 = polishOnly && zStart ? zStart : new Array(n).fill(0.5);
   let stopReasons: StopReason[] = [];
   let history: HistoryEntry[] = [];
   let searchEvaluations = 0;
   if (!polishOnly) {
     // a given start point competes with the search's best: the search never ends worse than it
-    const startScore = options.start ? score(z0, searchFrequencies, r.swrLimit * 0.975) : Infinity;
+    const startScore = zStart ? score(zStart, searchFrequencies, r.swrLimit * 0.975) : Infinity;
     const ipop = createIpop({
       x0: z0,
       sigma0: 0.25,
@@ -77,7 +79,7 @@ export function designBentArm(
       ipop.tell(zs, zs.map((z) => score(z, searchFrequencies, r.swrLimit * 0.975)));
     }
     const result = ipop.result();
-    if (result.f <= startScore) z0 = result.x;
+    z0 = result.f <= startScore || !zStart ? result.x : zStart;
     stopReasons = result.stopReasons;
     history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
     searchEvaluations = result.evaluations;
