@@ -1,6 +1,7 @@
 // Small string builders shared by every drawing: fixed number formatting (so identical input gives
 // identical bytes), XML escaping for all text, elements with attributes in a fixed order, and the
 // self-contained <svg> document wrapper (viewBox, width/height, <title>, generic font list).
+import { escapeXml, svgElement, type Attrs } from "../svgMarkup.js";
 import { FONT_FAMILY, PALETTE } from "./palette.js";
 
 /** Fixed-decimal number for SVG coordinates; trailing zeros trimmed, never "-0". */
@@ -12,24 +13,12 @@ export function num(v: number, digits = 2): string {
 }
 
 /** Escape the five XML special characters. */
-export function esc(text: string): string {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&apos;");
-}
-
-export type Attrs = Record<string, string | number | undefined>;
-
-function attrText(attrs: Attrs): string {
-  let out = "";
-  for (const [k, v] of Object.entries(attrs)) {
-    if (v === undefined) continue;
-    out += ` ${k}="${typeof v === "number" ? num(v) : esc(v)}"`;
-  }
-  return out;
-}
+export const esc = escapeXml;
+export type { Attrs };
 
 /** One element; `children` is already-built markup (use `text` for words). */
 export function el(name: string, attrs: Attrs, children?: string): string {
-  return children === undefined ? `<${name}${attrText(attrs)}/>` : `<${name}${attrText(attrs)}>${children}</${name}>`;
+  return svgElement(name, attrs, children, (v) => num(v));
 }
 
 /** A text element; the words are escaped here. */

@@ -35,7 +35,7 @@ describe("patternCutSvg", () => {
   it("labels the rings in dBi and names the cut in its caption", () => {
     const phi = patternCutSvg(entry, "phi"), theta = patternCutSvg(entry, "theta");
     expect(phi).toMatch(/dBi \(peak\)/);
-    expect(phi).toContain("Cut through the peak along φ̂ (in the wire&apos;s plane when the lobe is in it)");
+    expect(phi).toContain("Cut through the peak along φ̂ (in the wire&#39;s plane when the lobe is in it)");
     expect(theta).toContain("Cut through the peak along θ̂");
     expect(phi).toContain("Peak at the top");
   });
