@@ -1,10 +1,19 @@
-// The catalog site (built in a later step of the pipeline): source in site/, output in dist/.
+// The catalog site: source in site/, output in dist/. BENTWIRE_BASE sets the sub-path the site is
+// served under ("/" by default, e.g. "/club/atlas/"); every link and asset follows it.
+// BENTWIRE_ENTRIES (read by site/content.config.ts) and BENTWIRE_OUT_DIR let the tests build from
+// a fixture folder into a folder of their own.
 import { defineConfig } from "astro/config";
 
 export default defineConfig({
   srcDir: "./site",
-  outDir: "./dist",
-  base: process.env.BENTWIRE_BASE ?? "/",
+  outDir: process.env.BENTWIRE_OUT_DIR || "./dist",
+  base: process.env.BENTWIRE_BASE || "/",
   trailingSlash: "ignore",
-  build: { format: "directory" },
+  build: { format: "directory", inlineStylesheets: "never", concurrency: 2 },
+  compressHTML: true,
+  devToolbar: { enabled: false },
+  vite: {
+    // Scripts and fonts stay separate files (no inline scripts: the CSP allows none).
+    build: { assetsInlineLimit: 0 },
+  },
 });

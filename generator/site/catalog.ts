@@ -83,6 +83,36 @@ export function bestOf(band: Band, n: number): OkEntry[] {
   return out;
 }
 
+/** Bare SWR above which a compact design's match gets impractical (common practice, rough). */
+export const COMPACT_MAX_SWR = 6;
+
+export interface Highlight {
+  kind: "gain" | "direct" | "compact" | "simple";
+  label: string;
+  entry: OkEntry;
+}
+
+/**
+ * The band at a glance: the design with the most gain, the one with the most gain that needs no
+ * matching network, a compact one (the most gain with its larger side within half a wavelength
+ * and a bare SWR a simple match handles) or else the best of the fewest pieces per arm (the easiest
+ * to bend). A design picked once is not picked again; three at most.
+ */
+export function highlights(band: Band): Highlight[] {
+  const out: Highlight[] = [];
+  const taken = (e: OkEntry) => out.some((h) => h.entry.id === e.id);
+  const first = (list: OkEntry[]) => list.find((e) => !taken(e));
+  const push = (kind: Highlight["kind"], label: string, e: OkEntry | undefined) => { if (e) out.push({ kind, label, entry: e }); };
+  push("gain", "most gain", first(band.ok));
+  push("direct", "direct 50 Ω feed", first(band.ok.filter((e) => e.inputs.variant === "direct-feed")));
+  const lambda = 299_792_458 / band.designHz;
+  const size = (e: OkEntry) => Math.max(e.shape.spanM.x, e.shape.spanM.y);
+  push("compact", "compact", first(band.ok.filter((e) => size(e) <= lambda / 2 && e.figures.swr <= COMPACT_MAX_SWR)));
+  const fewest = Math.min(...band.ok.map((e) => e.inputs.piecesPerArm));
+  push("simple", "simplest to bend", first(band.ok.filter((e) => e.inputs.piecesPerArm === fewest)));
+  return out.slice(0, 3);
+}
+
 /** The buildable design with the widest SWR-below-limit span in a band, if any has one. */
 export function widestMatch(band: Band): OkEntry | null {
   let best: OkEntry | null = null;

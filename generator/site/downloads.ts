@@ -14,6 +14,8 @@ export interface TemplateSheet {
   column: number;
   rows: number;
   columns: number;
+  /** Whether the template is tiled over several sheets (else one sheet holds it all). */
+  tiled: boolean;
   /** "R1 C2", as printed on the sheet. */
   label: string;
 }
@@ -60,21 +62,36 @@ export const PAPERS: { paper: PaperName; label: string }[] = [
   { paper: "letter", label: "US Letter" },
 ];
 
+/**
+ * A 1:1 template that needs more sheets than this is not offered: a design that large (an HF wire
+ * many metres across) is laid out on the ground or a board from the coordinate table instead.
+ */
+export const MAX_TEMPLATE_SHEETS = 40;
+
+/** Sheets a 1:1 template of the design needs per paper, and whether it is offered. */
+export function templateSheetCounts(shape: ExportShape): { paper: PaperName; sheets: number; offered: boolean }[] {
+  return PAPERS.map(({ paper }) => {
+    const sheets = planBendingTemplate(shape, { paper }).pages.length;
+    return { paper, sheets, offered: sheets <= MAX_TEMPLATE_SHEETS };
+  });
+}
+
 function templateFiles(entry: OkEntry, shape: ExportShape): DownloadFile[] {
   return PAPERS.flatMap(({ paper, label }) => {
     const plan = planBendingTemplate(shape, { paper });
+    if (plan.pages.length > MAX_TEMPLATE_SHEETS) return [];
     const pages = bendingTemplateSvgs(shape, { paper });
     if (pages.length !== plan.pages.length) throw new Error(`site downloads: ${entry.id}: template plan and pages disagree`);
     return pages.map((svg, i): DownloadFile => {
       const p = plan.pages[i];
-      const single = pages.length === 1;
+      const single = !plan.tiled;
       return {
         group: `template-${paper}`,
         name: single ? `${entry.id}.template-${paper}.svg` : `${entry.id}.template-${paper}-r${p.row + 1}c${p.column + 1}.svg`,
         label: single ? `1:1 bending template, one ${label} sheet` : `1:1 bending template, ${label} sheet ${p.label}`,
         mediaType: "image/svg+xml",
         content: svg,
-        sheet: { paper, row: p.row, column: p.column, rows: plan.rows, columns: plan.columns, label: p.label },
+        sheet: { paper, row: p.row, column: p.column, rows: plan.rows, columns: plan.columns, tiled: plan.tiled, label: p.label },
       };
     });
   });
@@ -143,9 +160,9 @@ export function downloadRows(files: readonly DownloadFile[]): DownloadRow[] {
       rows.push(row);
     }
     const bytes = Buffer.byteLength(f.content, "utf8");
-    row.files.push({ name: f.name, linkText: f.sheet && f.sheet.rows * f.sheet.columns > 1 ? f.sheet.label : f.name, bytes });
+    row.files.push({ name: f.name, linkText: f.sheet?.tiled ? f.sheet.label : f.name, bytes });
     row.bytes += bytes;
-    if (f.sheet && f.sheet.rows * f.sheet.columns > 1) row.tiledPaper = f.sheet.paper;
+    if (f.sheet?.tiled) row.tiledPaper = f.sheet.paper;
   }
   for (const r of rows) {
     if (!r.group.startsWith("template-")) continue;
@@ -169,7 +186,7 @@ export function sheetMaps(files: readonly DownloadFile[]): SheetMap[] {
   const maps: SheetMap[] = [];
   for (const { paper, label } of PAPERS) {
     const sheets = files.filter((f) => f.sheet?.paper === paper);
-    if (sheets.length === 0 || sheets[0].sheet!.rows * sheets[0].sheet!.columns === 1) continue;
+    if (sheets.length === 0 || !sheets[0].sheet!.tiled) continue;
     const { rows, columns } = sheets[0].sheet!;
     const cells: SheetMap["cells"] = Array.from({ length: rows }, () => Array.from({ length: columns }, () => null));
     for (const f of sheets) cells[f.sheet!.row][f.sheet!.column] = { name: f.name, label: f.sheet!.label, bytes: Buffer.byteLength(f.content, "utf8") };

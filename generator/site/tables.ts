@@ -39,7 +39,7 @@ export interface BandRow {
 /** The SWR-below-limit bandwidth of a design as shown (kHz or MHz), tied to its field. */
 export function bandwidthShown(e: OkEntry): Shown {
   const span = e.sweep.swr2Span;
-  if (span === null) return plain("none");
+  if (span === null) return plain(e.match.needed ? "needs a match" : "none");
   const text = f.bandwidth(span.widthHz);
   return shown(span.touchesSweepEdge ? `≥ ${text}` : text, "sweep.swr2Span.widthHz", text.endsWith("kHz") ? "kHz" : "MHz");
 }
