@@ -14,6 +14,9 @@ import { barLabel, lengthLabel, pieceUnit, roundBarLengthM } from "./lengthLabel
 import { FONT, PALETTE } from "./palette.js";
 import { arrowHead, Bounds, el, num, points, svgDoc, text, type Pt } from "./svg.js";
 
+/** Pieces drawn shorter than this (px) get no length label on the drawing. */
+const MIN_LABELLED_PIECE_PX = 48;
+
 export interface ShapeOptions {
   /** Rendered width in CSS px (the viewBox keeps its own units). */
   widthPx?: number;
@@ -124,8 +127,11 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     const away = fv > 0 && fv < n - 1 ? unit(2 * feed[0] - P[fv - 1][0] - P[fv + 1][0], 2 * feed[1] - P[fv - 1][1] - P[fv + 1][1]) : ([0, 1] as Pt);
     const fu: Pt = away[0] || away[1] ? away : [0, 1];
     labels.push(around(feed, [fu, [0, 1], [1, 0], [-1, 0]], 14, "feed"));
+    let unlabelled = 0;
     for (let i = 0; i + 1 < n; i++) {
       const a = P[i], c = P[i + 1];
+      // a piece drawn shorter than its label would crowd the bends: the dimension table has it
+      if (Math.hypot(c[0] - a[0], c[1] - a[1]) < MIN_LABELLED_PIECE_PX) { unlabelled++; continue; }
       let nrm = unit(-(c[1] - a[1]), c[0] - a[0]);
       const mid: Pt = [(a[0] + c[0]) / 2, (a[1] + c[1]) / 2];
       if ((mid[0] - mean[0]) * nrm[0] + (mid[1] - mean[1]) * nrm[1] < 0) nrm = [-nrm[0], -nrm[1]];
@@ -153,7 +159,12 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
       text(ax + al + 4, ay + 4, "x", { "font-size": FONT.small, fill: PALETTE.inkSoft }) +
       text(ax - 4, ay - al - 3, "y", { "font-size": FONT.small, fill: PALETTE.inkSoft, "text-anchor": "end" }));
     b.add(ax + al + 14, ay + 4).add(ax - 14, ay - al - 14);
-    const key = [...(bends ? ["Angle at a bend: how far the wire turns there (dashed: straight on)."] : []), "Angle at the feed: between the two arms.", ...(tiltNote ? [tiltNote] : [])];
+    const key = [
+      ...(bends ? ["Angle at a bend: how far the wire turns there (dashed: straight on)."] : []),
+      "Angle at the feed: between the two arms.",
+      ...(unlabelled ? ["Pieces too short to label here: see the dimension table."] : []),
+      ...(tiltNote ? [tiltNote] : []),
+    ];
     key.forEach((line) => {
       const ky = b.maxY + 18; // b grows with each line, so the next goes below
       over.push(text(x0, ky, line, { "font-size": FONT.small, fill: PALETTE.inkSoft }));
