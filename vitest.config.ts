@@ -3,6 +3,7 @@ import { defineConfig } from "vitest/config";
 export default defineConfig({
   test: {
     include: ["test/**/*.test.ts"],
+    globalSetup: ["test/setup/chromium.ts"],
     testTimeout: 120_000,
     hookTimeout: 300_000,
   },
