@@ -9,6 +9,7 @@ import { entryInputHash, previousKey, referenceHash, referenceId, type Reference
 import type { Entry } from "./entrySchema.js";
 import { expandGrid, shardOf, type CellRequest, type Grid } from "./grid.js";
 import { readEntry, readReference, referenceDir, writeEntry, writeReference } from "./store.js";
+import { createScheduler } from "./scheduler.js";
 import type { Task } from "./worker.js";
 
 export interface GenerateOptions {
@@ -82,6 +83,7 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
   const workers = Math.max(1, Math.min(o.workers, cpus().length * 4));
   const execArgv = process.execArgv.some((a) => a.includes("tsx")) ? process.execArgv : [...process.execArgv, "--import", "tsx"];
   const pool = new Piscina({ filename: new URL("./worker.ts", import.meta.url).href, minThreads: workers, maxThreads: workers, idleTimeout: 1000, execArgv });
+  const scheduler = createScheduler(pool, workers);
   try {
     const referenceOf = (key: ReferenceKey): Promise<ReferenceResult> => {
       const id = referenceId(key);
@@ -90,7 +92,7 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
         const prev = previousKey(key);
         refs.set(id, have ? Promise.resolve(have) : (async () => {
           const previous = prev ? await referenceOf(prev) : null;
-          const r = (await pool.run({ kind: "reference", grid: o.grid, key, previous } satisfies Task)) as ReferenceResult;
+          const r = await scheduler.run<ReferenceResult>({ kind: "reference", grid: o.grid, key, previous } satisfies Task, 0);
           await writeReference(refDir, r);
           tick(id);
           return r;
@@ -100,7 +102,7 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
     };
     await Promise.all(todo.map(async (cell) => {
       const reference = await referenceOf(keyOf(cell));
-      const entry = (await pool.run({ kind: "entry", grid: o.grid, cell, reference } satisfies Task)) as Entry;
+      const entry = await scheduler.run<Entry>({ kind: "entry", grid: o.grid, cell, reference } satisfies Task, 1);
       await writeEntry(o.outDir, entry);
       if (entry.status !== "ok") infeasible++;
       tick(cell.id);

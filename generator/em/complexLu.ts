@@ -14,15 +14,19 @@ export function createComplexMatrix(n: number): ComplexMatrix {
   return { n, re: new Float64Array(n * n), im: new Float64Array(n * n) };
 }
 
-/** Factorises a copy of `a` and solves for one right-hand side; returns x as {re, im}. */
+/**
+ * Factorises `a` and solves for one right-hand side; returns x as {re, im}. With `overwrite` the
+ * factors replace `a` (no copy: the caller's matrix is scratch); otherwise `a` is left as it was.
+ */
 export function solveComplex(
   a: ComplexMatrix,
   bRe: Float64Array,
   bIm: Float64Array,
+  overwrite = false,
 ): { re: Float64Array; im: Float64Array } {
   const n = a.n;
-  const re = a.re.slice();
-  const im = a.im.slice();
+  const re = overwrite ? a.re : a.re.slice();
+  const im = overwrite ? a.im : a.im.slice();
   const xr = bRe.slice();
   const xi = bIm.slice();
   for (let k = 0; k < n; k++) {

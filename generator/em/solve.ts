@@ -74,7 +74,7 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const bRe = new Float64Array(mesh.unknowns);
   const bIm = new Float64Array(mesh.unknowns);
   bRe[mesh.feedBasis] = 1; // 1 V delta gap
-  const { re, im } = solveComplex(z, bRe, bIm);
+  const { re, im } = solveComplex(z, bRe, bIm, true); // z is ours alone: factor it in place
   const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
   const i2 = ir * ir + ii * ii;
   return {
