@@ -7,26 +7,18 @@
 
 import { checkBox, checkStartInBox } from "./boxBounds.js";
 import { checkInteger, checkNonNegative, checkPositive, checkSeed, checkTarget } from "./checkOptions.js";
-import { createCmaEs, type CmaEs } from "./cmaEs.js";
+import { createCmaEs, type CmaEs, type CmaEsOptions } from "./cmaEs.js";
 import { defaultPopulationSize } from "./cmaEsParameters.js";
 import { createRng, type Rng } from "./rng.js";
 import type { HistoryEntry, OptimizeResult, StopReason } from "./types.js";
 
-export interface IpopOptions {
-  x0: readonly number[];
-  sigma0: number;
-  lowerBounds?: readonly number[];
-  upperBounds?: readonly number[];
-  /** λ of the first run; default 4 + ⌊3 ln n⌋. */
-  populationSize?: number;
-  seed: number;
-  /** Total over all runs; never exceeded. Default 10⁴·n. */
-  maxEvaluations?: number;
+/**
+ * The CMA-ES options (populationSize is λ of the first run; maxEvaluations the total over all runs,
+ * never exceeded; tolFun and tolX apply per run), plus the restart budget and a target.
+ */
+export interface IpopOptions extends Omit<CmaEsOptions, "conditionLimit"> {
   /** Default 9. */
   maxRestarts?: number;
-  /** Per-run tolerances passed to CMA-ES (defaults 1e-12 and 1e-12·σ0). */
-  tolFun?: number;
-  tolX?: number;
   /** Stop as soon as f ≤ target; default −Infinity (never). */
   target?: number;
 }
