@@ -8,13 +8,13 @@
 // Z is complex symmetric; the fill visits each unordered segment pair once.
 import { ETA0_OHM, MU0_H_PER_M } from "../units.js";
 import { createComplexMatrix, type ComplexMatrix } from "./complexLu.js";
-import { createKernelRules, pairIntegrals, type KernelRules } from "./kernel.js";
+import { KERNEL_RULES, pairIntegrals, type KernelRules } from "./kernel.js";
 import type { Mesh } from "./mesh.js";
 
 export function fillImpedance(
   mesh: Mesh,
   kRadPerM: number,
-  rules: KernelRules = createKernelRules(),
+  rules: KernelRules = KERNEL_RULES,
 ): ComplexMatrix {
   const z = createComplexMatrix(mesh.unknowns);
   const n = mesh.unknowns;

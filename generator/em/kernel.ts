@@ -24,6 +24,9 @@ export function createKernelRules(): KernelRules {
   return { far, nearOuter: gaussLegendre01(10), nearSmooth: gaussLegendre01(4) };
 }
 
+/** The rules every solve uses: a table of constants, computed once rather than per matrix fill. */
+export const KERNEL_RULES: Readonly<KernelRules> = createKernelRules();
+
 /** Out: [K00re, K00im, K10re, K10im, K01re, K01im, K11re, K11im] for segments p, q. */
 export function pairIntegrals(
   mesh: Mesh,

@@ -8,7 +8,7 @@ import { solveComplex } from "./complexLu.js";
 import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
 import { checkMesh } from "./geometryChecks.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
-import { createKernelRules, type KernelRules } from "./kernel.js";
+import { KERNEL_RULES, type KernelRules } from "./kernel.js";
 import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
 import { DEFAULT_PEAK_OPTIONS, findPeak, integratePattern, patternPointsFor, type PeakOptions } from "./pattern.js";
 import type { Conductor, Shape } from "./shapeFile.js";
@@ -64,7 +64,7 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const mesh = buildMesh(shape, options.segmentsPerWavelength);
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
-  const z = fillImpedance(mesh, k, options.rules ?? createKernelRules());
+  const z = fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
   const sigma = conductivityOf(shape.conductor);
   const rPerM = new Float64Array(mesh.segmentCount);
   if (Number.isFinite(sigma)) {

@@ -91,16 +91,25 @@ export function createCmaEs(options: CmaEsOptions): CmaEs {
   };
 }
 
-export function initialCmaEsState(options: CmaEsOptions): CmaEsState {
-  const name = "cmaEs";
+/** The option checks CMA-ES and IPOP share: start point, box, σ0, λ, seed and budget. */
+export function checkStartOptions(name: string, options: Omit<CmaEsOptions, "conditionLimit">) {
   if (!Array.isArray(options.x0)) throw new Error(`${name}: x0 must be an array of numbers`);
   const n = options.x0.length;
   const box = checkBox(name, n, options.lowerBounds, options.upperBounds);
-  const x0 = checkStartInBox(name, options.x0, box);
-  const sigma0 = checkPositive(name, "sigma0", options.sigma0);
-  const lambda = checkInteger(name, "populationSize", options.populationSize ?? defaultPopulationSize(n), 2);
-  const seed = checkSeed(name, options.seed);
-  const maxEvaluations = checkInteger(name, "maxEvaluations", options.maxEvaluations ?? 1e4 * n, 1, true);
+  return {
+    n,
+    box,
+    x0: checkStartInBox(name, options.x0, box),
+    sigma0: checkPositive(name, "sigma0", options.sigma0),
+    lambda: checkInteger(name, "populationSize", options.populationSize ?? defaultPopulationSize(n), 2),
+    seed: checkSeed(name, options.seed),
+    maxEvaluations: checkInteger(name, "maxEvaluations", options.maxEvaluations ?? 1e4 * n, 1, true),
+  };
+}
+
+export function initialCmaEsState(options: CmaEsOptions): CmaEsState {
+  const name = "cmaEs";
+  const { n, box, x0, sigma0, lambda, seed, maxEvaluations } = checkStartOptions(name, options);
   const tolFun = checkNonNegative(name, "tolFun", options.tolFun ?? 1e-12);
   const tolX = checkNonNegative(name, "tolX", options.tolX ?? 1e-12 * sigma0);
   const conditionLimit = checkPositive(name, "conditionLimit", options.conditionLimit ?? 1e14);

@@ -5,10 +5,8 @@
 // Stopping rule: stop when f_best ≤ target, or Σ evaluations + λ_k > maxEvaluations, or a run
 // stops (cmaEsStop.ts) with k = maxRestarts; otherwise restart with λ_{k+1} = 2λ_k.
 
-import { checkBox, checkStartInBox } from "./boxBounds.js";
-import { checkInteger, checkNonNegative, checkPositive, checkSeed, checkTarget } from "./checkOptions.js";
-import { createCmaEs, type CmaEs, type CmaEsOptions } from "./cmaEs.js";
-import { defaultPopulationSize } from "./cmaEsParameters.js";
+import { checkInteger, checkNonNegative, checkTarget } from "./checkOptions.js";
+import { checkStartOptions, createCmaEs, type CmaEs, type CmaEsOptions } from "./cmaEs.js";
 import { createRng, type Rng } from "./rng.js";
 import type { HistoryEntry, OptimizeResult, StopReason } from "./types.js";
 
@@ -66,17 +64,11 @@ interface IpopState {
 
 export function createIpop(options: IpopOptions): Ipop {
   const name = "ipop";
-  if (!Array.isArray(options.x0)) throw new Error(`${name}: x0 must be an array of numbers`);
-  const n = options.x0.length;
-  const box = checkBox(name, n, options.lowerBounds, options.upperBounds);
-  const x0 = checkStartInBox(name, options.x0, box);
-  checkPositive(name, "sigma0", options.sigma0);
+  const { box, x0, lambda: lambda0, seed, maxEvaluations } = checkStartOptions(name, options);
   if (options.tolFun !== undefined) checkNonNegative(name, "tolFun", options.tolFun);
   if (options.tolX !== undefined) checkNonNegative(name, "tolX", options.tolX);
-  const lambda0 = checkInteger(name, "populationSize", options.populationSize ?? defaultPopulationSize(n), 2);
-  const rng = createRng(checkSeed(name, options.seed));
+  const rng = createRng(seed);
   const runOptions = { ...options, lowerBounds: box.lower, upperBounds: box.upper, populationSize: lambda0 };
-  const maxEvaluations = checkInteger(name, "maxEvaluations", options.maxEvaluations ?? 1e4 * n, 1, true);
   const s: IpopState = {
     options: runOptions,
     rng,
