@@ -4,6 +4,7 @@
 import { solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { DEG_PER_RAD } from "../units.js";
+import { feedAnalysis, type FeedAnalysis } from "./feedAnalysis.js";
 import { suggestMatch, type MatchSuggestion } from "./feedMatch.js";
 import { describeLobe, type LobeWords } from "./lobeWords.js";
 import {
@@ -21,6 +22,8 @@ export interface AnalysisOptions {
   bandHz: [number, number];
   lineImpedanceOhm: number;
   tolerance: Omit<ToleranceOptions, "lineImpedanceOhm">;
+  /** SWR limit the feed options and the as-built rule judge against (default 2). */
+  swrLimit?: number;
 }
 
 export interface PatternFigures {
@@ -52,6 +55,8 @@ export interface Analysis {
   pattern: PatternFigures;
   checks: TrustFigures;
   warnings: string[];
+  /** Ranked feed options, as-built SWR percentiles and the tolerance verdict over gain and SWR. */
+  feed?: FeedAnalysis;
 }
 
 export function checkAnalysisOptions(frequencyHz: number, o: AnalysisOptions): void {
@@ -73,6 +78,8 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
   const cuts = principalCuts(theta, phi);
   const polarization = polarizationAt(s.farField, theta, phi);
   const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm);
+  const toleranceOptions = { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm };
+  const tolerance = toleranceStudy(shape, s.peakGainDbi, toleranceOptions);
   return {
     design: {
       frequencyHz: shape.frequencyHz,
@@ -85,7 +92,7 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
     },
     sweep,
     match: suggestMatch(sweep, shape.frequencyHz, s.inputImpedanceOhm),
-    tolerance: toleranceStudy(shape, s.peakGainDbi, { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm }),
+    tolerance,
     pattern: {
       beamwidthAlongThetaDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongTheta),
       beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongPhi),
@@ -98,5 +105,6 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
     },
     checks: trustFigures(shape, s),
     warnings: s.warnings,
+    feed: feedAnalysis(shape, sweep, s, toleranceOptions, tolerance, { bandHz: options.bandHz, lineImpedanceOhm: options.lineImpedanceOhm, swrLimit: options.swrLimit }),
   };
 }

@@ -102,6 +102,7 @@ export function buildEntry(p: EntryParts): Entry {
       gridDbi: a.pattern.gridDbi,
     } : null,
     checks: ok ? { ...a.checks, warnings: a.warnings } : null,
+    feed: ok && a.feed ? a.feed : null,
     optimizer: {
       evaluations: outcome.evaluations,
       searchEvaluations: outcome.searchEvaluations,

@@ -99,6 +99,44 @@ export function makeEntrySchema(z: Z) {
     stopReasons: z.array(z.object({ reason: z.string(), value: num.nullable() }).strict()),
     history: z.array(z.object({ evaluations: z.number().int(), bestF: num.nullable() }).strict()),
   }).strict();
+  // feed options (issue 10): optional so entries written before them still parse
+  const swrPct = z.object({ p50: num.nullable(), p90: num.nullable(), p95: num.nullable() }).strict();
+  const feedOption = z.object({
+    kind: z.enum(["balun", "l-network", "quarter-wave"]),
+    build: z.string(),
+    needsNoParts: z.boolean(),
+    circuit: z.object({
+      balunRatio: num,
+      balunLossDb: num,
+      network: z.array(component).optional(),
+      quarterWave: z.object({ impedanceOhm: num, designFrequencyHz: num, lengthM: num, lossDbPer100mAt100MHz: num }).strict().optional(),
+    }).strict(),
+    bandSwr: z.array(num.nullable()),
+    worstSwr: num.nullable(),
+    meetsLimit: z.boolean(),
+    lossDb: num.nullable(),
+    realizedGainDbi: num.nullable(),
+    worstRealizedGainDbi: num.nullable(),
+  }).strict();
+  const feed = z.object({
+    options: z.object({
+      swrLimit: num,
+      partQ: z.object({ inductorQ: num, capacitorQ: num }).strict(),
+      options: z.array(feedOption),
+      recommended: z.number().int().nullable(),
+      verdict: z.string(),
+      rejected: z.array(z.string()),
+    }).strict(),
+    toleranceSwr: z.object({
+      samples: z.number().int(),
+      failedSamples: z.number().int(),
+      seed: z.number().int(),
+      swrLimit: num,
+      perFrequency: z.array(z.object({ frequencyHz: num, bare: swrPct, afterFeed: swrPct.optional() }).strict()),
+      meetsLimitAsBuilt: z.boolean(),
+    }).strict(),
+    verdict: z.object({ sensitive: z.boolean(), words: z.string() }).strict(),
+  }).strict();
   return z.object({
     schemaVersion: z.literal(ENTRY_SCHEMA_VERSION),
     id: z.string().regex(/^[a-z0-9][a-z0-9.-]*$/),
@@ -115,6 +153,7 @@ export function makeEntrySchema(z: Z) {
     tolerance: tolerance.nullable(),
     pattern: pattern.nullable(),
     checks: checks.nullable(),
+    feed: feed.nullable().optional(),
     optimizer,
     contentHash: z.string().regex(/^[0-9a-f]{64}$/),
   }).strict();

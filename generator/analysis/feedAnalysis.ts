@@ -1,0 +1,49 @@
+// The feed part of a design's analysis: the ranked feed options from the band sweep (feedOptions.ts),
+// the bending-tolerance SWR percentiles bare and after the recommended feed (toleranceSwr.ts), the
+// publishing rule on their 90th percentile, and the tolerance verdict over gain and SWR together.
+import type { Shape } from "../em/index.js";
+import { applyFeed, feedOptions, type FeedOptions } from "./feedOptions.js";
+import type { Sweep } from "./sweep.js";
+import type { ToleranceOptions, ToleranceStudy } from "./tolerance.js";
+import { toleranceFrequencies, toleranceSwrStudy, toleranceVerdict, type ToleranceSwrStudy, type ToleranceVerdict } from "./toleranceSwr.js";
+
+/** SWR limit a design is judged against when the caller names none (common practice for amateur gear). */
+export const DEFAULT_SWR_LIMIT = 2;
+/** Frequencies across the band at which the bent copies' SWR is solved (edges, quartiles, centre). */
+export const DEFAULT_TOLERANCE_SWR_FREQUENCIES = 5;
+
+export interface FeedAnalysis {
+  options: FeedOptions;
+  toleranceSwr: ToleranceSwrStudy;
+  verdict: ToleranceVerdict;
+}
+
+export interface FeedAnalysisOptions {
+  bandHz: [number, number];
+  lineImpedanceOhm: number;
+  swrLimit?: number;
+  toleranceSwrFrequencies?: number;
+}
+
+export function feedAnalysis(
+  shape: Shape,
+  sweep: Sweep,
+  design: { inputImpedanceOhm: { re: number; im: number }; peakGainDbi: number },
+  tolerance: ToleranceOptions,
+  gainStudy: Pick<ToleranceStudy, "fragile">,
+  o: FeedAnalysisOptions,
+): FeedAnalysis {
+  const swrLimit = o.swrLimit ?? DEFAULT_SWR_LIMIT;
+  const band = sweep.points.filter((p) => p.inBand).map((p) => ({ frequencyHz: p.frequencyHz, impedanceOhm: p.impedanceOhm, gainDbi: p.gainDbi }));
+  const options = feedOptions({
+    design: { frequencyHz: shape.frequencyHz, impedanceOhm: design.inputImpedanceOhm, gainDbi: design.peakGainDbi },
+    band,
+    lineImpedanceOhm: o.lineImpedanceOhm,
+    swrLimit,
+  });
+  const chosen = options.recommended === null ? null : options.options[options.recommended];
+  const transform = chosen ? (z: { re: number; im: number }, f: number) => applyFeed(chosen.circuit, z, f, options.partQ).impedanceOhm : undefined;
+  const frequencies = toleranceFrequencies(o.bandHz, o.toleranceSwrFrequencies ?? DEFAULT_TOLERANCE_SWR_FREQUENCIES);
+  const toleranceSwr = toleranceSwrStudy(shape, frequencies, tolerance, swrLimit, transform);
+  return { options, toleranceSwr, verdict: toleranceVerdict(gainStudy, toleranceSwr) };
+}
