@@ -2,6 +2,7 @@
 // the bending-tolerance SWR percentiles bare and after the recommended feed (toleranceSwr.ts), the
 // publishing rule on their 90th percentile, and the tolerance verdict over gain and SWR together.
 import type { Shape } from "../em/index.js";
+import { CENTRE_FEED_NOTE, OFF_CENTRE_FEED_NOTE } from "./feedOptionsStock.js";
 import { applyFeed, feedOptions, type FeedOptions } from "./feedOptions.js";
 import type { Sweep } from "./sweep.js";
 import type { ToleranceOptions, ToleranceStudy } from "./tolerance.js";
@@ -12,7 +13,24 @@ export const DEFAULT_SWR_LIMIT = 2;
 /** Frequencies across the band at which the bent copies' SWR is solved (edges, quartiles, centre). */
 export const DEFAULT_TOLERANCE_SWR_FREQUENCIES = 5;
 
+/** Lengths along the fed wire from the feed to either tip (m), and whether they differ by over 1 %. */
+export function feedPosition(shape: Shape): { toStartM: number; toEndM: number; offCentre: boolean } {
+  const points = shape.wires[shape.feed.wire].pointsM;
+  const run = (a: number, b: number) => {
+    let s = 0;
+    for (let i = a; i < b; i++) s += Math.hypot(points[i + 1][0] - points[i][0], points[i + 1][1] - points[i][1], points[i + 1][2] - points[i][2]);
+    return s;
+  };
+  const toStartM = run(0, shape.feed.vertex);
+  const toEndM = run(shape.feed.vertex, points.length - 1);
+  return { toStartM, toEndM, offCentre: Math.abs(toStartM - toEndM) > 0.01 * (toStartM + toEndM) };
+}
+
 export interface FeedAnalysis {
+  /** What to put at the feed point against common-mode current (centre or off-centre feed). */
+  buildNote: string;
+  /** The feed's distance from the wire's first tip, as a fraction of the fed wire. */
+  feedFraction: number;
   options: FeedOptions;
   toleranceSwr: ToleranceSwrStudy;
   verdict: ToleranceVerdict;
@@ -45,5 +63,12 @@ export function feedAnalysis(
   const transform = chosen ? (z: { re: number; im: number }, f: number) => applyFeed(chosen.circuit, z, f, options.partQ).impedanceOhm : undefined;
   const frequencies = toleranceFrequencies(o.bandHz, o.toleranceSwrFrequencies ?? DEFAULT_TOLERANCE_SWR_FREQUENCIES);
   const toleranceSwr = toleranceSwrStudy(shape, frequencies, tolerance, swrLimit, transform);
-  return { options, toleranceSwr, verdict: toleranceVerdict(gainStudy, toleranceSwr) };
+  const at = feedPosition(shape);
+  return {
+    buildNote: at.offCentre ? OFF_CENTRE_FEED_NOTE : CENTRE_FEED_NOTE,
+    feedFraction: at.toStartM / (at.toStartM + at.toEndM),
+    options,
+    toleranceSwr,
+    verdict: toleranceVerdict(gainStudy, toleranceSwr),
+  };
 }

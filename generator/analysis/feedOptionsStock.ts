@@ -46,3 +46,11 @@ export function matchedLossNp(c: CoaxStock, lengthM: number, frequencyHz: number
   const db = (c.lossDbPer100mAt100MHz * Math.sqrt(frequencyHz / 100e6) * lengthM) / 100;
   return db / (20 / Math.LN10);
 }
+
+/** Build note for a centre-fed (balanced) wire. */
+export const CENTRE_FEED_NOTE =
+  "The wire is fed at its centre and is balanced: put a 1:1 current balun or a common-mode choke at the feed point so the coax shield does not radiate (common practice).";
+
+/** Build note for an off-centre feed (common practice). */
+export const OFF_CENTRE_FEED_NOTE =
+  "The feed is off centre, so it is unbalanced: the two arms present unequal voltages and the coax shield carries common-mode current unless it is choked. Put a current choke right at the feed point with at least about 1 kΩ of common-mode impedance across the band (several turns of the coax through a ferrite ring, or a string of clamp-on ferrite beads, of a ferrite mix meant for the band), or a current balun of the ratio the feed options name; add a second choke about a quarter wave further down the coax if the shield still shows current (common practice).";

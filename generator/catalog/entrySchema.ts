@@ -119,6 +119,8 @@ export function makeEntrySchema(z: Z) {
     worstRealizedGainDbi: num.nullable(),
   }).strict();
   const feed = z.object({
+    buildNote: z.string(),
+    feedFraction: num,
     options: z.object({
       swrLimit: num,
       partQ: z.object({ inductorQ: num, capacitorQ: num }).strict(),

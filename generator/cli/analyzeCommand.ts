@@ -69,7 +69,7 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;
   if (options.json) {
-    const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks };
+    const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks, feed: analysis.feed };
     process.stdout.write(`${JSON.stringify({ ...summary, ...extra })}\n`);
     return;
   }

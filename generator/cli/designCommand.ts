@@ -10,6 +10,7 @@ import { writeFileAtomic } from "../fsAtomic.js";
 import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
 import { DEG_PER_RAD } from "../units.js";
 import { solutionSummary, summaryText } from "./analyzeCommand.js";
+import { designOffCentreCommand } from "./designOffCentreCommand.js";
 import { fixed, table } from "./format.js";
 
 export interface DesignFlags {
@@ -23,6 +24,8 @@ export interface DesignFlags {
   seed: number;
   json?: boolean;
   out?: string;
+  /** "centre" (default) or "off-centre" (designOffCentreCommand.ts). */
+  family?: string;
 }
 
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
@@ -59,6 +62,7 @@ export function parametersReport(x: number[], r: DesignRequest) {
 
 export async function designCommand(flags: DesignFlags): Promise<void> {
   const request = requestFromFlags(flags);
+  if (flags.family === "off-centre") return designOffCentreCommand(request, flags);
   const bar = process.stderr.isTTY && !flags.json ? new SingleBar({ format: "designing [{bar}] {value}/{total} evaluations, best {best} dBi", stream: process.stderr, hideCursor: true }) : null;
   const budget = request.maxEvaluations ?? 500 * (2 * request.piecesPerArm - 1) + 500;
   bar?.start(budget + 60 * (2 * request.piecesPerArm - 1), 0, { best: "–" });

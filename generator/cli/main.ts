@@ -38,6 +38,7 @@ program
   .option("--seed <S>", "random seed", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
   .option("--json", "print one JSON object")
   .option("--out <file>", "write the winning shape as a shape file")
+  .option("--family <name>", "centre (mirror-image arms) or off-centre (the feed point's place along the wire is searched too)", oneOf("--family", ["centre", "off-centre"] as const), "centre")
   .action((opts) => designCommand(opts));
 
 program

@@ -1,0 +1,79 @@
+// `design --family off-centre`: finds the off-centre-fed bent wire with the most gain (for
+// direct-feed: within the SWR limit across the band) and reports it like `design` does, plus where
+// the feed sits and the choke an unbalanced feed needs.
+import { designOffCentre, offCentreShapeOf } from "../design/designOffCentre.js";
+import type { DesignRequest } from "../design/request.js";
+import { OFF_CENTRE_FEED_NOTE } from "../analysis/feedOptionsStock.js";
+import { solveShape } from "../em/index.js";
+import { writeFileAtomic } from "../fsAtomic.js";
+import { armLengthsM, armPieceLengthsM, unpackOffCentre } from "../shapes/offCentre.js";
+import { offCentreSpecOf } from "../design/offCentreObjective.js";
+import { DEG_PER_RAD } from "../units.js";
+import { solutionSummary, summaryText } from "./analyzeCommand.js";
+import { fixed, table } from "./format.js";
+
+/** The parameters in the units a builder reads. */
+export function offCentreParametersReport(x: number[], r: DesignRequest) {
+  const p = unpackOffCentre(x, r.piecesPerArm);
+  const spec = offCentreSpecOf(r);
+  const { leftM, rightM } = armLengthsM(p, spec);
+  const arm = (a: typeof p.right, lengthM: number) => ({
+    lengthM,
+    pieceLengthsM: armPieceLengthsM(a, lengthM),
+    bendAnglesDeg: a.bendAnglesRad.map((b) => b * DEG_PER_RAD),
+  });
+  return {
+    vector: x,
+    family: "off-centre" as const,
+    feedFromTipM: leftM,
+    feedFraction: p.feedFraction,
+    apexAngleDeg: 2 * p.halfApexRad * DEG_PER_RAD,
+    shortArm: arm(p.left, leftM),
+    longArm: arm(p.right, rightM),
+  };
+}
+
+export async function designOffCentreCommand(request: DesignRequest, flags: { json?: boolean; out?: string }): Promise<void> {
+  const outcome = designOffCentre(request);
+  const shape = { ...offCentreShapeOf(outcome.x, request), name: `${request.lengthWl} λ wire fed off centre, ${request.piecesPerArm === 1 ? "1 piece" : `${request.piecesPerArm} pieces`} per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
+  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  const parameters = offCentreParametersReport(outcome.x, request);
+  if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
+  const result = {
+    status: outcome.status,
+    message: outcome.message,
+    variant: request.variant,
+    family: "off-centre",
+    ...summary,
+    maxSwrInBand: outcome.evaluation.maxSwr,
+    parameters,
+    buildNote: OFF_CENTRE_FEED_NOTE,
+    evaluations: outcome.evaluations,
+    seed: request.seed,
+    stopReasons: outcome.stopReasons,
+    shape,
+  };
+  if (flags.json) {
+    process.stdout.write(`${JSON.stringify(result)}\n`);
+    return;
+  }
+  const armRows = (name: string, a: typeof parameters.shortArm) => {
+    const rows = [[`${name} arm piece`, "length (m)", "turn before it (°)"]];
+    a.pieceLengthsM.forEach((len, i) => rows.push([String(i + 1), fixed(len, 4), i === 0 ? `${fixed(parameters.apexAngleDeg / 2, 1)} from the apex bisector` : fixed(a.bendAnglesDeg[i - 1], 1)]));
+    return table(rows);
+  };
+  const lines = [
+    `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
+    summaryText(shape.name, summary),
+    "",
+    `feed point: ${fixed(parameters.feedFromTipM, 4)} m from one tip (${fixed(parameters.feedFraction, 3)} of the wire); the arms meet there at ${fixed(parameters.apexAngleDeg, 1)}°`,
+    "short arm, from the feed outward:",
+    armRows("short", parameters.shortArm),
+    "long arm, from the feed outward:",
+    armRows("long", parameters.longArm),
+  ];
+  if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
+  lines.push("", OFF_CENTRE_FEED_NOTE);
+  if (flags.out) lines.push(`shape written to ${flags.out}`);
+  process.stdout.write(`${lines.join("\n")}\n`);
+}

@@ -1,0 +1,82 @@
+// Designs one off-centre-fed bent wire with the same search as the centre-fed family
+// (designBentArm.ts): IPOP-CMA-ES over the box-normalised parameters z = (x − lo)/(hi − lo) ∈ [0,1]^n,
+// σ0 = 0.25, SWR checked at the band edges and centre against 97.5 % of the limit, then a
+// Nelder–Mead polish (step 0.02 in z) checking all 11 band points against the limit itself.
+// Parameters and box: shapes/offCentre.ts and shapes/offCentreConstraints.ts (4K − 2 of them).
+// `start` (parameters x) competes with the search's best, so the search never ends worse than it.
+import { createIpop, nelderMead } from "../optimize/index.js";
+import { offCentreBounds } from "../shapes/offCentreConstraints.js";
+import { offCentreParameterCount } from "../shapes/offCentre.js";
+import { wavelengthM } from "../units.js";
+import { SWEEP_POINTS_IN_BAND, type DesignOutcome, type DesignProgress } from "./designBentArm.js";
+import { checkFrequencies } from "./objective.js";
+import { evaluateOffCentre, offCentreShapeOf, offCentreSpecOf } from "./offCentreObjective.js";
+import { limitsOf, type DesignRequest } from "./request.js";
+
+const SEARCH_SWR_POINTS = 3;
+const SEARCH_MARGIN = 0.975;
+
+export function designOffCentre(r: DesignRequest, options: { start?: number[]; onProgress?: (p: DesignProgress) => void } = {}): DesignOutcome {
+  const n = offCentreParameterCount(r.piecesPerArm);
+  const { lower, upper } = offCentreBounds(offCentreSpecOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
+  const toX = (z: readonly number[]) => z.map((v, i) => lower[i] + v * (upper[i] - lower[i]));
+  const toZ = (x: readonly number[]) => x.map((v, i) => (upper[i] > lower[i] ? (v - lower[i]) / (upper[i] - lower[i]) : 0));
+  const clamp01 = (v: number) => Math.min(1, Math.max(0, v));
+  const searchFrequencies = checkFrequencies(r, SEARCH_SWR_POINTS);
+  const polishFrequencies = checkFrequencies(r, SWEEP_POINTS_IN_BAND);
+  let evaluations = 0;
+  let bestGain: number | null = null;
+  const score = (z: readonly number[], freqs: number[], limit: number) => {
+    const e = evaluateOffCentre(toX(z), r, freqs, limit);
+    evaluations++;
+    const improved = e.score < 0 && (bestGain === null || -e.score > bestGain);
+    if (improved) bestGain = -e.score;
+    if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain });
+    return e.score;
+  };
+  const zStart = options.start ? toZ(options.start).map(clamp01) : null;
+  const startScore = zStart ? score(zStart, searchFrequencies, r.swrLimit * SEARCH_MARGIN) : Infinity;
+  const ipop = createIpop({
+    x0: new Array(n).fill(0.5),
+    sigma0: 0.25,
+    lowerBounds: new Array(n).fill(0),
+    upperBounds: new Array(n).fill(1),
+    seed: r.seed,
+    maxEvaluations: r.maxEvaluations ?? 500 * n + 500,
+    maxRestarts: 4,
+    tolFun: 1e-4,
+    tolX: 1e-4,
+  });
+  while (ipop.stop().length === 0) {
+    const zs = ipop.ask();
+    ipop.tell(zs, zs.map((z) => score(z, searchFrequencies, r.swrLimit * SEARCH_MARGIN)));
+  }
+  const result = ipop.result();
+  const z0 = zStart && startScore < result.f ? zStart : result.x;
+  const history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
+  const polish = nelderMead((z) => score(z, polishFrequencies, r.swrLimit), {
+    x0: z0.map(clamp01),
+    initialStep: 0.02,
+    lowerBounds: new Array(n).fill(0),
+    upperBounds: new Array(n).fill(1),
+    maxEvaluations: 60 * n,
+    tolX: 1e-5,
+    tolFun: 1e-5,
+  });
+  history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + result.evaluations, bestF: h.bestF })));
+  const x = toX(polish.x);
+  const evaluation = evaluateOffCentre(x, r, polishFrequencies, r.swrLimit);
+  const feasible = evaluation.score < 0;
+  return {
+    status: feasible ? "ok" : "infeasible",
+    message: feasible ? "constraints met" : `no off-centre-fed shape met every constraint: ${evaluation.reasons.join("; ")}`,
+    x,
+    evaluation,
+    evaluations,
+    searchEvaluations: result.evaluations,
+    stopReasons: [...result.stopReasons, ...polish.stopReasons],
+    history,
+  };
+}
+
+export { offCentreShapeOf };
