@@ -1,6 +1,7 @@
 // Ways to feed a design from 50 Ω coax, each with what to buy or build, its worst in-band SWR, its
 // loss and the realized gain after it, ranked by that realized gain (at the design frequency) among
-// the options whose worst in-band SWR meets the limit. Options:
+// the options whose worst in-band SWR meets the limit; the recommendation is the first, unless a
+// balun alone comes within NO_PARTS_PREFERENCE_DB of it. Options:
 //   direct through a 1:1 current balun; a 1:4, 1:6 or 1:9 current balun (ideal transformer Z/n plus
 //   its stated loss, feedOptionsStock.ts); an L-network (Pozar, Microwave Engineering, 4th ed., §5.1)
 //   of practical E12 parts with finite Q (feedOptionsParts.ts), behind a 1:1 or a step-down balun;
@@ -161,6 +162,12 @@ function quarterWaveOptions(input: FeedOptionsInput, q: PartQuality): FeedOption
   return [evaluateOption("quarter-wave", build, circuit, input, q)];
 }
 
+/**
+ * A balun alone is preferred over a network within this much realized gain: a network's tuning,
+ * joints and weatherproofing are worth more to a builder than 0.1 dB (common practice).
+ */
+export const NO_PARTS_PREFERENCE_DB = 0.1;
+
 const NO_MATCH_ADVICE =
   "No practical match exists: no balun ratio, L-network of E12 parts within the stated bounds or quarter-wave transformer keeps the SWR within the limit across the band. Use a tuner at the feed point (not at the radio), or choose another wire length, or an off-centre-fed design.";
 
@@ -177,9 +184,11 @@ export function feedOptions(input: FeedOptionsInput): FeedOptions {
   const meeting = all.filter((o) => o.meetsLimit).sort((a, b) => b.realizedGainDbi - a.realizedGainDbi);
   const rest = all.filter((o) => !o.meetsLimit).sort((a, b) => a.worstSwr - b.worstSwr);
   const options = [...meeting, ...rest];
-  const top = meeting[0];
+  // recommend the best, but an option needing no parts within NO_PARTS_PREFERENCE_DB of it wins
+  const plain = meeting.find((o) => o.needsNoParts && o.realizedGainDbi >= meeting[0].realizedGainDbi - NO_PARTS_PREFERENCE_DB);
+  const top = plain ?? meeting[0];
   const verdict = top
     ? `Recommended: ${top.build}. Worst in-band SWR ${top.worstSwr.toFixed(2)}, feed loss ${top.lossDb.toFixed(2)} dB, realized gain ${top.realizedGainDbi.toFixed(2)} dBi.`
     : NO_MATCH_ADVICE;
-  return { swrLimit: input.swrLimit, partQ: q, options, recommended: top ? 0 : null, verdict, rejected: [...new Set(rejected)] };
+  return { swrLimit: input.swrLimit, partQ: q, options, recommended: top ? options.indexOf(top) : null, verdict, rejected: [...new Set(rejected)] };
 }

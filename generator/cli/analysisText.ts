@@ -1,6 +1,7 @@
 // The readable report of a full analysis: band sweep, feed match, tolerance, pattern, trust.
 import type { Analysis } from "../analysis/index.js";
 import type { MatchComponent } from "../analysis/feedMatch.js";
+import { feedText } from "./feedText.js";
 import { complexText, fixed, table } from "./format.js";
 
 export function componentText(c: MatchComponent): string {
@@ -38,6 +39,7 @@ export function analysisText(a: Analysis): string {
     `  gain dBi 5/50/95 %: ${fixed(t.gainDbi.p5, 2)} / ${fixed(t.gainDbi.p50, 2)} / ${fixed(t.gainDbi.p95, 2)} (nominal ${fixed(t.nominalGainDbi, 2)})${t.fragile ? "  FRAGILE: bend carefully" : ""}`,
     `  SWR 5/50/95 %: ${fixed(t.swr.p5, 2)} / ${fixed(t.swr.p50, 2)} / ${fixed(t.swr.p95, 2)}${t.failedSamples ? `; ${t.failedSamples} copies touched themselves` : ""}`,
   );
+  if (a.feed) out.push("", feedText(a.feed));
   const p = a.pattern;
   const bw = (v: number | null) => (v === null ? "none (no half-power point)" : `${fixed(v, 1)}°`);
   out.push(
