@@ -92,7 +92,8 @@ export function buildEntry(p: EntryParts): Entry {
     } : null,
     sweep: ok ? a.sweep : null,
     match: ok ? a.match : null,
-    tolerance: ok ? a.tolerance : null,
+    // the published verdict covers SWR as built (feed.verdict) as well as gain
+    tolerance: ok ? { ...a.tolerance, fragile: a.feed ? a.feed.verdict.sensitive : a.tolerance.fragile } : null,
     pattern: ok ? {
       cutStepDeg: CUT_STEP_DEG,
       cutAlongPhiDbi: a.pattern.cutAlongPhiDbi,
