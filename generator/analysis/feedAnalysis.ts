@@ -1,12 +1,14 @@
 // The feed part of a design's analysis: the ranked feed options from the band sweep (feedOptions.ts),
 // the bending-tolerance SWR percentiles bare and after the recommended feed (toleranceSwr.ts), the
 // publishing rule on their 90th percentile, and the tolerance verdict over gain and SWR together.
+// The recommendation is the best-ranked feed whose 90th percentile over the bent copies meets the
+// limit across the band; only when no feed does is it the best on the nominal shape alone.
 import type { Shape } from "../em/index.js";
 import { CENTRE_FEED_NOTE, OFF_CENTRE_FEED_NOTE } from "./feedOptionsStock.js";
-import { applyFeed, feedOptions, type FeedOptions } from "./feedOptions.js";
+import { applyFeed, feedOptions, recommend, recommendationWords, type FeedOption, type FeedOptions } from "./feedOptions.js";
 import type { Sweep } from "./sweep.js";
 import type { ToleranceOptions, ToleranceStudy } from "./tolerance.js";
-import { toleranceFrequencies, toleranceSwrStudy, toleranceVerdict, type ToleranceSwrStudy, type ToleranceVerdict } from "./toleranceSwr.js";
+import { copyImpedances, swrStudyOf, toleranceFrequencies, toleranceVerdict, type ToleranceSwrStudy, type ToleranceVerdict } from "./toleranceSwr.js";
 
 /** SWR limit a design is judged against when the caller names none (common practice for amateur gear). */
 export const DEFAULT_SWR_LIMIT = 2;
@@ -59,10 +61,20 @@ export function feedAnalysis(
     lineImpedanceOhm: o.lineImpedanceOhm,
     swrLimit,
   });
+  // the bent copies are solved once; every feed that meets the limit nominally is then judged on them
+  const copies = copyImpedances(shape, toleranceFrequencies(o.bandHz, o.toleranceSwrFrequencies ?? DEFAULT_TOLERANCE_SWR_FREQUENCIES), tolerance);
+  const transformOf = (x: FeedOption) => (z: { re: number; im: number }, f: number) => applyFeed(x.circuit, z, f, options.partQ).impedanceOhm;
+  for (const x of options.options) x.holdsAsBuilt = x.meetsLimit && swrStudyOf(copies, swrLimit, transformOf(x)).meetsLimitAsBuilt;
+  // prefer the best feed that also holds as built; when none does, keep the nominal choice and say so
+  const robust = recommend(options.options, (x) => x.holdsAsBuilt === true);
+  if (robust !== null) {
+    options.recommended = robust;
+    options.verdict = recommendationWords(options.options[robust]);
+  } else if (options.recommended !== null) {
+    options.verdict += ` No feed keeps 9 in 10 hand-bent copies at SWR ≤ ${swrLimit} across the band: bend carefully and check the SWR after building.`;
+  }
   const chosen = options.recommended === null ? null : options.options[options.recommended];
-  const transform = chosen ? (z: { re: number; im: number }, f: number) => applyFeed(chosen.circuit, z, f, options.partQ).impedanceOhm : undefined;
-  const frequencies = toleranceFrequencies(o.bandHz, o.toleranceSwrFrequencies ?? DEFAULT_TOLERANCE_SWR_FREQUENCIES);
-  const toleranceSwr = toleranceSwrStudy(shape, frequencies, tolerance, swrLimit, transform);
+  const toleranceSwr = swrStudyOf(copies, swrLimit, chosen ? transformOf(chosen) : undefined);
   const at = feedPosition(shape);
   return {
     buildNote: at.offCentre ? OFF_CENTRE_FEED_NOTE : CENTRE_FEED_NOTE,

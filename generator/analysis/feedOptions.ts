@@ -41,6 +41,8 @@ export interface FeedOption {
   lossDb: number;
   realizedGainDbi: number;
   worstRealizedGainDbi: number;
+  /** Set by feedAnalysis.ts: whether 9 in 10 bent copies keep SWR ≤ limit across the band with this feed. */
+  holdsAsBuilt?: boolean;
 }
 
 export interface FeedOptions {
@@ -95,7 +97,8 @@ function evaluateOption(kind: FeedOption["kind"], build: string, circuit: FeedCi
   const realized = (p: FeedPoint) => {
     const r = applyFeed(circuit, p.impedanceOhm, p.frequencyHz, q);
     const g = abs(reflectionCoefficient(r.impedanceOhm, z0));
-    return { swr: swr(r.impedanceOhm, z0), efficiency: r.efficiency, gainDbi: p.gainDbi + toDb(Math.max(1e-30, 1 - g * g)) + toDb(r.efficiency) };
+    const efficiency = r.efficiency > 0 && r.efficiency <= 1 ? r.efficiency : 1e-30; // a passive feed; guard against a non-physical load
+    return { swr: swr(r.impedanceOhm, z0), efficiency, gainDbi: p.gainDbi + toDb(Math.max(1e-30, 1 - g * g)) + toDb(efficiency) };
   };
   const band = input.band.map(realized);
   const at = realized(input.design);
@@ -171,6 +174,20 @@ export const NO_PARTS_PREFERENCE_DB = 0.1;
 const NO_MATCH_ADVICE =
   "No practical match exists: no balun ratio, L-network of E12 parts within the stated bounds or quarter-wave transformer keeps the SWR within the limit across the band. Use a tuner at the feed point (not at the radio), or choose another wire length, or an off-centre-fed design.";
 
+/**
+ * Index of the option to recommend among the eligible ones (options are in rank order): the best,
+ * unless a balun alone comes within NO_PARTS_PREFERENCE_DB of it. Null when none is eligible.
+ */
+export function recommend(options: readonly FeedOption[], eligible: (o: FeedOption) => boolean): number | null {
+  const ok = options.filter(eligible);
+  if (ok.length === 0) return null;
+  const plain = ok.find((o) => o.needsNoParts && o.realizedGainDbi >= ok[0].realizedGainDbi - NO_PARTS_PREFERENCE_DB);
+  return options.indexOf(plain ?? ok[0]);
+}
+
+export const recommendationWords = (o: FeedOption): string =>
+  `Recommended: ${o.build}. Worst in-band SWR ${o.worstSwr.toFixed(2)}, feed loss ${o.lossDb.toFixed(2)} dB, realized gain ${o.realizedGainDbi.toFixed(2)} dBi.`;
+
 export function feedOptions(input: FeedOptionsInput): FeedOptions {
   const q = input.partQ ?? DEFAULT_PART_Q;
   const rejected: string[] = [];
@@ -184,11 +201,7 @@ export function feedOptions(input: FeedOptionsInput): FeedOptions {
   const meeting = all.filter((o) => o.meetsLimit).sort((a, b) => b.realizedGainDbi - a.realizedGainDbi);
   const rest = all.filter((o) => !o.meetsLimit).sort((a, b) => a.worstSwr - b.worstSwr);
   const options = [...meeting, ...rest];
-  // recommend the best, but an option needing no parts within NO_PARTS_PREFERENCE_DB of it wins
-  const plain = meeting.find((o) => o.needsNoParts && o.realizedGainDbi >= meeting[0].realizedGainDbi - NO_PARTS_PREFERENCE_DB);
-  const top = plain ?? meeting[0];
-  const verdict = top
-    ? `Recommended: ${top.build}. Worst in-band SWR ${top.worstSwr.toFixed(2)}, feed loss ${top.lossDb.toFixed(2)} dB, realized gain ${top.realizedGainDbi.toFixed(2)} dBi.`
-    : NO_MATCH_ADVICE;
-  return { swrLimit: input.swrLimit, partQ: q, options, recommended: top ? options.indexOf(top) : null, verdict, rejected: [...new Set(rejected)] };
+  const recommended = recommend(options, (o) => o.meetsLimit);
+  const verdict = recommended === null ? NO_MATCH_ADVICE : recommendationWords(options[recommended]);
+  return { swrLimit: input.swrLimit, partQ: q, options, recommended, verdict, rejected: [...new Set(rejected)] };
 }

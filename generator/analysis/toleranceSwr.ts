@@ -57,6 +57,49 @@ export function toleranceFrequencies(bandHz: [number, number], count: number): n
   return Array.from({ length: count }, (_, i) => bandHz[0] + ((bandHz[1] - bandHz[0]) * i) / (count - 1));
 }
 
+/** Feed impedances of the seeded bent copies at each frequency: impedances[copy][frequency]. */
+export interface CopyImpedances {
+  frequenciesHz: number[];
+  impedances: Complex[][];
+  samples: number;
+  failedSamples: number;
+  seed: number;
+  lineImpedanceOhm: number;
+}
+
+export function copyImpedances(shape: Shape, frequenciesHz: readonly number[], options: ToleranceOptions): CopyImpedances {
+  if (!(Number.isInteger(options.samples) && options.samples > 0)) {
+    throw new InputError(`tolerance: samples must be a whole number above 0 (got ${options.samples})`);
+  }
+  const rng = createRng(options.seed);
+  const impedances: Complex[][] = [];
+  let failed = 0;
+  for (let i = 0; i < options.samples; i++) {
+    const copy = perturbShape(shape, rng, options);
+    try {
+      // solve every frequency first so a failed copy adds nothing
+      impedances.push(frequenciesHz.map((f) => solveFeed({ ...copy, frequencyHz: f }).inputImpedanceOhm));
+    } catch (err) {
+      if (!(err instanceof InputError)) throw err;
+      failed++; // the bent copy touched itself: counted, not solved
+    }
+  }
+  return { frequenciesHz: [...frequenciesHz], impedances, samples: options.samples, failedSamples: failed, seed: options.seed, lineImpedanceOhm: options.lineImpedanceOhm };
+}
+
+/** The per-frequency SWR percentiles of solved copies, bare and (when given) after a feed, and the rule. */
+export function swrStudyOf(c: CopyImpedances, swrLimit: number, feed?: FeedTransform): ToleranceSwrStudy {
+  const none: SwrPercentiles = { p50: NaN, p90: NaN, p95: NaN };
+  const of = (values: number[]) => (values.length ? swrPercentiles(values) : none);
+  const perFrequency = c.frequenciesHz.map((frequencyHz, k): SwrAtFrequency => {
+    const row: SwrAtFrequency = { frequencyHz, bare: of(c.impedances.map((z) => swr(z[k], c.lineImpedanceOhm))) };
+    if (feed) row.afterFeed = of(c.impedances.map((z) => swr(feed(z[k], frequencyHz), c.lineImpedanceOhm)));
+    return row;
+  });
+  const judged = perFrequency.map((r) => (r.afterFeed ?? r.bare).p90);
+  return { samples: c.samples, failedSamples: c.failedSamples, seed: c.seed, swrLimit, perFrequency, meetsLimitAsBuilt: meetsSwrAsBuilt(judged, swrLimit) };
+}
+
 export function toleranceSwrStudy(
   shape: Shape,
   frequenciesHz: readonly number[],
@@ -64,35 +107,7 @@ export function toleranceSwrStudy(
   swrLimit: number,
   feed?: FeedTransform,
 ): ToleranceSwrStudy {
-  if (!(Number.isInteger(options.samples) && options.samples > 0)) {
-    throw new InputError(`tolerance: samples must be a whole number above 0 (got ${options.samples})`);
-  }
-  const rng = createRng(options.seed);
-  const bare: number[][] = frequenciesHz.map(() => []);
-  const after: number[][] = frequenciesHz.map(() => []);
-  let failed = 0;
-  for (let i = 0; i < options.samples; i++) {
-    const copy = perturbShape(shape, rng, options);
-    try {
-      // solve every frequency first so a failed copy adds to no list
-      const zs = frequenciesHz.map((f) => solveFeed({ ...copy, frequencyHz: f }).inputImpedanceOhm);
-      zs.forEach((z, k) => {
-        bare[k].push(swr(z, options.lineImpedanceOhm));
-        if (feed) after[k].push(swr(feed(z, frequenciesHz[k]), options.lineImpedanceOhm));
-      });
-    } catch (err) {
-      if (!(err instanceof InputError)) throw err;
-      failed++; // the bent copy touched itself: counted, not solved
-    }
-  }
-  const none: SwrPercentiles = { p50: NaN, p90: NaN, p95: NaN };
-  const perFrequency = frequenciesHz.map((frequencyHz, k): SwrAtFrequency => {
-    const row: SwrAtFrequency = { frequencyHz, bare: bare[k].length ? swrPercentiles(bare[k]) : none };
-    if (feed) row.afterFeed = after[k].length ? swrPercentiles(after[k]) : none;
-    return row;
-  });
-  const judged = perFrequency.map((r) => (r.afterFeed ?? r.bare).p90);
-  return { samples: options.samples, failedSamples: failed, seed: options.seed, swrLimit, perFrequency, meetsLimitAsBuilt: meetsSwrAsBuilt(judged, swrLimit) };
+  return swrStudyOf(copyImpedances(shape, frequenciesHz, options), swrLimit, feed);
 }
 
 export interface ToleranceVerdict {

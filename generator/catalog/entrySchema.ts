@@ -117,6 +117,7 @@ export function makeEntrySchema(z: Z) {
     lossDb: num.nullable(),
     realizedGainDbi: num.nullable(),
     worstRealizedGainDbi: num.nullable(),
+    holdsAsBuilt: z.boolean().optional(),
   }).strict();
   const feed = z.object({
     buildNote: z.string(),

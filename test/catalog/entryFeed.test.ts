@@ -22,6 +22,11 @@ describe("entry feed field", () => {
     expect(feed.toleranceSwr.perFrequency).toHaveLength(3);
     expect(feed.feedFraction).toBeCloseTo(0.5, 12);
     expect(feed.buildNote).toMatch(/balanced/);
+    // every option is judged on the bent copies; the recommended one holds as built when any does
+    expect(feed.options.options.every((o) => typeof o.holdsAsBuilt === "boolean")).toBe(true);
+    expect(feed.options.options.every((o) => !o.holdsAsBuilt || o.meetsLimit)).toBe(true);
+    if (feed.options.options.some((o) => o.holdsAsBuilt)) expect(feed.options.options[feed.options.recommended!].holdsAsBuilt).toBe(true);
+    expect(feed.toleranceSwr.meetsLimitAsBuilt).toBe(feed.options.recommended !== null && feed.options.options[feed.options.recommended].holdsAsBuilt === true);
     const parsed = entrySchema.shape.feed.safeParse(roundDeep(feed));
     expect(parsed.success, JSON.stringify(parsed.error?.issues?.[0])).toBe(true);
     expect(entrySchema.shape.feed.safeParse(undefined).success).toBe(true);
