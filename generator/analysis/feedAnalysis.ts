@@ -34,6 +34,10 @@ export interface FeedAnalysis {
   /** The feed's distance from the wire's first tip, as a fraction of the fed wire. */
   feedFraction: number;
   options: FeedOptions;
+  /** Realized gain after the recommended feed at the design frequency (the figure to rank by), or null. */
+  realizedGainDbi: number | null;
+  /** True when the recommended feed is a bought balun alone (no matching parts to build). */
+  needsNoParts: boolean;
   toleranceSwr: ToleranceSwrStudy;
   verdict: ToleranceVerdict;
 }
@@ -80,6 +84,8 @@ export function feedAnalysis(
     buildNote: at.offCentre ? OFF_CENTRE_FEED_NOTE : CENTRE_FEED_NOTE,
     feedFraction: at.toStartM / (at.toStartM + at.toEndM),
     options,
+    realizedGainDbi: chosen ? chosen.realizedGainDbi : null,
+    needsNoParts: chosen ? chosen.needsNoParts : false,
     toleranceSwr,
     verdict: toleranceVerdict(gainStudy, toleranceSwr),
   };

@@ -130,6 +130,8 @@ export function makeEntrySchema(z: Z) {
       verdict: z.string(),
       rejected: z.array(z.string()),
     }).strict(),
+    realizedGainDbi: num.nullable(),
+    needsNoParts: z.boolean(),
     toleranceSwr: z.object({
       samples: z.number().int(),
       failedSamples: z.number().int(),

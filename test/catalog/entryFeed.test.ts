@@ -22,6 +22,9 @@ describe("entry feed field", () => {
     expect(feed.toleranceSwr.perFrequency).toHaveLength(3);
     expect(feed.feedFraction).toBeCloseTo(0.5, 12);
     expect(feed.buildNote).toMatch(/balanced/);
+    const rec = feed.options.recommended === null ? null : feed.options.options[feed.options.recommended];
+    expect(feed.realizedGainDbi).toBe(rec ? rec.realizedGainDbi : null);
+    expect(feed.needsNoParts).toBe(rec ? rec.needsNoParts : false);
     // every option is judged on the bent copies; the recommended one holds as built when any does
     expect(feed.options.options.every((o) => typeof o.holdsAsBuilt === "boolean")).toBe(true);
     expect(feed.options.options.every((o) => !o.holdsAsBuilt || o.meetsLimit)).toBe(true);
