@@ -5,7 +5,7 @@
 // The publishing rule: a design is published as meeting SWR ≤ limit only when the 90th percentile
 // of its copies meets the limit at every checked frequency of the band (so at most one hand-built
 // copy in ten exceeds it anywhere in the band). The verdict joins that with the gain verdict.
-import { solveFeed, type Shape } from "../em/index.js";
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH, solveFeed, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { createRng } from "../optimize/rng.js";
 import type { Complex } from "./complex.js";
@@ -72,13 +72,15 @@ export function copyImpedances(shape: Shape, frequenciesHz: readonly number[], o
     throw new InputError(`tolerance: samples must be a whole number above 0 (got ${options.samples})`);
   }
   const rng = createRng(options.seed);
+  // the mesh stays the one of the design frequency, as in the band sweep (sweep.ts)
+  const spw0 = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
   const impedances: Complex[][] = [];
   let failed = 0;
   for (let i = 0; i < options.samples; i++) {
     const copy = perturbShape(shape, rng, options);
     try {
       // solve every frequency first so a failed copy adds nothing
-      impedances.push(frequenciesHz.map((f) => solveFeed({ ...copy, frequencyHz: f }).inputImpedanceOhm));
+      impedances.push(frequenciesHz.map((f) => solveFeed({ ...copy, frequencyHz: f }, { segmentsPerWavelength: (spw0 * shape.frequencyHz) / f }).inputImpedanceOhm));
     } catch (err) {
       if (!(err instanceof InputError)) throw err;
       failed++; // the bent copy touched itself: counted, not solved
