@@ -7,6 +7,7 @@ import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCom
 import { designCommand } from "./designCommand.js";
 import { bandMhz, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { VARIANTS } from "../design/request.js";
+import { GROUND_FLAG_HELP, groundName, heightM } from "./groundOptions.js";
 
 const program = new Command("bentwire")
   .description("Bent-wire antenna designs: solve, optimize, analyze and catalog")
@@ -23,6 +24,8 @@ program
   .option("--line-ohm <Z0>", "feed line impedance in Ω", positiveNumber("--line-ohm"), 50)
   .option("--tolerance-samples <N>", "bent copies in the tolerance study", wholeNumber("--tolerance-samples", 1, 100000), 64)
   .option("--seed <S>", "seed of the tolerance study", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
+  .option("--ground <name>", GROUND_FLAG_HELP, groundName("--ground"))
+  .option("--height-m <H>", "lift the shape so its lowest point is H metres above the ground", heightM("--height-m"))
   .action((shape: string, opts) => analyzeCommand(shape, opts));
 
 program
