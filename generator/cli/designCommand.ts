@@ -11,6 +11,8 @@ import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
 import { DEG_PER_RAD } from "../units.js";
 import { solutionSummary, summaryText } from "./analyzeCommand.js";
 import { fixed, table } from "./format.js";
+import type { Ground } from "../em/ground.js";
+import { ELEVATION_WINDOWS_DEG } from "../design/groundObjective.js";
 
 export interface DesignFlags {
   freqMhz?: number;
@@ -23,6 +25,10 @@ export interface DesignFlags {
   seed: number;
   json?: boolean;
   out?: string;
+  ground?: Ground;
+  heightM?: number;
+  mounting?: string;
+  objective?: string;
 }
 
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
@@ -39,6 +45,10 @@ export function requestFromFlags(flags: DesignFlags): DesignRequest {
       variant: flags.variant,
       bandHz: flags.bandMhz,
       seed: flags.seed,
+      ground: flags.ground,
+      heightM: flags.heightM,
+      mounting: flags.mounting,
+      objective: flags.objective,
     },
     "design",
   );
@@ -65,7 +75,15 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
+  const mountedWords = request.ground ? `, ${request.mounting} over ${request.ground.type} ground` : "";
+  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz${mountedWords}` };
+  const overGround = request.ground && {
+    mounting: request.mounting,
+    objective: request.objective,
+    elevationWindowDeg: ELEVATION_WINDOWS_DEG[request.objective],
+    objectiveGainDbi: outcome.evaluation.gainDbi,
+    feedHeightM: shape.wires[shape.feed.wire].pointsM[shape.feed.vertex][2],
+  };
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   const parameters = parametersReport(outcome.x, request);
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
@@ -79,6 +97,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     evaluations: outcome.evaluations,
     seed: request.seed,
     stopReasons: outcome.stopReasons,
+    ...overGround,
     shape,
   };
   if (flags.json) {
@@ -97,6 +116,10 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     "right arm, from the feed outward (the left arm is its mirror image):",
     table(rows),
   ];
+  if (overGround) {
+    const [lo, hi] = overGround.elevationWindowDeg;
+    lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
+  }
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
   if (flags.out) lines.push(`shape written to ${flags.out}`);
   process.stdout.write(`${lines.join("\n")}\n`);

@@ -8,6 +8,8 @@ import { designCommand } from "./designCommand.js";
 import { bandMhz, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { VARIANTS } from "../design/request.js";
 import { GROUND_FLAG_HELP, groundName, heightM } from "./groundOptions.js";
+import { MOUNTINGS } from "../shapes/mounting.js";
+import { ELEVATION_OBJECTIVES } from "../design/groundObjective.js";
 
 const program = new Command("bentwire")
   .description("Bent-wire antenna designs: solve, optimize, analyze and catalog")
@@ -41,6 +43,10 @@ program
   .option("--seed <S>", "random seed", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
   .option("--json", "print one JSON object")
   .option("--out <file>", "write the winning shape as a shape file")
+  .option("--ground <name>", `${GROUND_FLAG_HELP.replace(/ \(default.*$/, "")} (default free space)`, groundName("--ground"))
+  .option("--height-m <H>", "over ground: height of the wire plane (horizontal) or of the lowest point (vertical), metres", heightM("--height-m"))
+  .option("--mounting <m>", "over ground: horizontal (wire plane level at the height) or vertical (feed at the top of one mast, ends tied down)", oneOf("--mounting", MOUNTINGS), "horizontal")
+  .option("--objective <o>", "over ground: peak, long-distance (best gain at 5–25° elevation) or near-vertical (60–90°)", oneOf("--objective", ELEVATION_OBJECTIVES), "peak")
   .action((opts) => designCommand(opts));
 
 program

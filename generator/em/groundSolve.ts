@@ -58,10 +58,11 @@ export interface GroundSolveInput {
 }
 
 export function groundResult(
-  ground: Ground, s: GroundSolveInput, options: { peak?: PeakOptions; integrate: boolean },
+  ground: Ground, s: GroundSolveInput, options: { peak?: PeakOptions; integrate: boolean; elevationWindowDeg?: [number, number] },
 ): GroundResult {
   const field = createGroundFarField(s.mesh, s.currentRe, s.currentIm, s.kRadPerM, ground, s.frequencyHz);
-  const peak = findGroundPeak(field, options.peak ?? DEFAULT_PEAK_OPTIONS);
+  const [lo, hi] = options.elevationWindowDeg ?? [0, 90];
+  const peak = findGroundPeak(field, options.peak ?? DEFAULT_PEAK_OPTIONS, [lo * RAD_PER_DEG, hi * RAD_PER_DEG]);
   const out = new Float64Array(4);
   const gainAt = (elDeg: number) => gainDbiOf(intensityAtElevation(field, elDeg * RAD_PER_DEG, peak.azimuthRad, out), s.inputPowerW);
   const cutCount = Math.round(90 / ELEVATION_CUT_STEP_DEG) + 1;
@@ -96,7 +97,7 @@ export function groundResult(
 export function solutionOverGround(shape: Shape, feed: FeedSolution, options: SolveOptions): Solution {
   const ground = shape.ground!;
   const integrate = options.energyBalance === true || ground.type === "real";
-  const g = groundResult(ground, { ...feed, frequencyHz: shape.frequencyHz }, { peak: options.peak, integrate });
+  const g = groundResult(ground, { ...feed, frequencyHz: shape.frequencyHz }, { peak: options.peak, integrate, elevationWindowDeg: options.elevationWindowDeg });
   const { mesh, inputPowerW } = feed;
   return {
     frequencyHz: shape.frequencyHz,

@@ -24,6 +24,8 @@ export interface SolveOptions {
   energyBalance?: boolean;
   peak?: PeakOptions;
   rules?: KernelRules;
+  /** Over ground only: search the peak within these elevations (degrees), e.g. [5, 25]. */
+  elevationWindowDeg?: [number, number];
 }
 
 export interface Solution {
