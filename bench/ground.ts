@@ -4,6 +4,8 @@
 // search included, no pattern integral (as the optimizer calls it) except where noted.
 import { solveShape, validateShape, type Shape } from "../generator/em/index.js";
 import { GROUND_PRESETS } from "../generator/em/ground.js";
+import { evaluate } from "../generator/design/objective.js";
+import { parseDesignRequest } from "../generator/design/request.js";
 
 export interface GroundCase {
   name: string;
@@ -21,7 +23,32 @@ const lift = (points: number[][], h: number) => points.map(([x, y, z]) => [x, y,
 const bent = [[-0.52, 0.42, 0], [-0.42, 0.2, 0], [-0.2, 0.15, 0], [0, 0, 0], [0.2, 0.15, 0], [0.42, 0.2, 0], [0.52, 0.42, 0]];
 const dipole = [[-0.25, 0, 0], [0, 0, 0], [0.25, 0, 0]];
 
-export function benchGround(runs = 20): GroundCase[] {
+/** CPU seconds per optimizer evaluation of a 1.5λ K = 3 shape on 20 m: free space vs over ground. */
+export function benchGroundObjective(runs = 40): GroundCase[] {
+  const base = { frequencyHz: 14.1e6, lengthWl: 1.5, piecesPerArm: 3, wireDiameterM: 2e-3 };
+  const requests: [string, object][] = [
+    ["objective 1.5λ K=3, free space", {}],
+    ["objective 1.5λ K=3, 10.6 m over perfect ground, peak", { ground: { type: "perfect" }, heightM: 10.6 }],
+    ["objective 1.5λ K=3, 10.6 m over average ground, 5–25°", { ground: GROUND_PRESETS.average, heightM: 10.6, objective: "long-distance" }],
+  ];
+  const x = [0.9, 0.3, 0.3, 0.3, 0.3];
+  return requests.map(([name, extra]) => {
+    const r = parseDesignRequest({ ...base, ...extra });
+    for (let i = 0; i < 5; i++) evaluate(x, r, [], 2);
+    const times: number[] = [];
+    const cpu0 = process.cpuUsage();
+    for (let i = 0; i < runs; i++) {
+      const t0 = performance.now();
+      evaluate(x, r, [], 2);
+      times.push(performance.now() - t0);
+    }
+    const cpu = process.cpuUsage(cpu0);
+    times.sort((a, b) => a - b);
+    return { name, unknowns: 0, medianMs: times[Math.floor(runs / 2)], cpuSPerSolve: (cpu.user + cpu.system) / 1e6 / runs };
+  });
+}
+
+export function benchGround(runs = 40): GroundCase[] {
   const cases: [string, Shape][] = [
     ["dipole 0.5λ, free space", wire(dipole)],
     ["dipole 0.5λ, λ/2 over perfect ground", wire(lift(dipole, 0.5), { ground: { type: "perfect" } })],
@@ -33,6 +60,7 @@ export function benchGround(runs = 20): GroundCase[] {
   ];
   return cases.map(([name, shape]) => {
     const times: number[] = [];
+    for (let r = 0; r < 5; r++) solveShape(shape); // warm-up: compiled code, not first-call costs
     const cpu0 = process.cpuUsage();
     let unknowns = 0;
     for (let r = 0; r < runs; r++) {

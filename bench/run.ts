@@ -2,7 +2,7 @@
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
-import { benchGround } from "./ground.js";
+import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchSolver } from "./solver.js";
 
@@ -28,10 +28,10 @@ if (wants("solver")) {
 }
 
 if (wants("ground")) {
-  const cases = benchGround();
+  const cases = [...benchGround(), ...benchGroundObjective()];
   out.ground = cases;
   if (!json) {
-    console.log("\nover ground beside free space (solveShape, median of 20 runs; CPU s per solve)");
+    console.log("\nover ground beside free space (solveShape, median of 40 runs after 5 warm-up runs; CPU s per solve)");
     for (const c of cases) console.log(`${c.name.padEnd(52)} ${String(c.unknowns).padEnd(4)} ${ms(c.medianMs).padEnd(9)} ms  ${c.cpuSPerSolve.toFixed(4)} s`);
   }
 }

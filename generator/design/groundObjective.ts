@@ -23,7 +23,11 @@ export function groundedShape(shape: Shape, r: DesignRequest): Shape {
   return { ...mountShape(shape, r.mounting, r.heightM), ground: r.ground };
 }
 
-/** Solve options for the objective: the elevation window over ground, nothing in free space. */
+/**
+ * Solve options for the objective: over ground the elevation window, and no pattern integral (the
+ * score is gain, 4πU/P_in, which needs none); nothing in free space.
+ */
 export function objectiveSolveOptions(r: DesignRequest): SolveOptions {
-  return r.ground && r.objective !== "peak" ? { elevationWindowDeg: ELEVATION_WINDOWS_DEG[r.objective] } : {};
+  if (!r.ground) return {};
+  return { energyBalance: false, ...(r.objective !== "peak" ? { elevationWindowDeg: ELEVATION_WINDOWS_DEG[r.objective] } : {}) };
 }

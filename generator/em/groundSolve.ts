@@ -96,7 +96,10 @@ export function groundResult(
 /** Over ground: the peak over the upper half-space, gain 4πU/P_in, ground loss (em/groundSolve.ts). */
 export function solutionOverGround(shape: Shape, feed: FeedSolution, options: SolveOptions): Solution {
   const ground = shape.ground!;
-  const integrate = options.energyBalance === true || ground.type === "real";
+  // real ground needs the integral for its loss, directivity and efficiency; `energyBalance: false`
+  // (given explicitly: the optimizer, which scores gain alone) skips it, and those then count the
+  // ground loss as radiated
+  const integrate = options.energyBalance === true || (ground.type === "real" && options.energyBalance !== false);
   const g = groundResult(ground, { ...feed, frequencyHz: shape.frequencyHz }, { peak: options.peak, integrate, elevationWindowDeg: options.elevationWindowDeg });
   const { mesh, inputPowerW } = feed;
   return {

@@ -21,6 +21,7 @@ export const SOLVER_VERSION = "bentwire-em-1";
 
 export interface SolveOptions {
   segmentsPerWavelength?: number;
+  /** Free space and perfect ground: integrate the pattern. Real ground integrates unless false. */
   energyBalance?: boolean;
   peak?: PeakOptions;
   rules?: KernelRules;
