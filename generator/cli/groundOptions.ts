@@ -85,12 +85,15 @@ export function groundText(s: GroundSummary): string[] {
     `  peak                 elevation ${fixed(s.peakElevationDeg, 1)}°, azimuth ${fixed(s.peakAzimuthDeg, 1)}° (from +x toward +y); upper half-space only`,
     `  gain by elevation    ${s.gainAtElevationDbi.map((e) => `${e.elevationDeg}° ${fixed(e.gainDbi, 1)}`).join(", ")} dBi (at the peak azimuth)`,
   ];
-  if (s.groundLossW !== null) {
+  if (s.ground.type === "perfect") lines.push("  ground loss          none (perfect ground; the computed residual is the energy balance error)");
+  else if (s.groundLossW !== null) {
     const share = inputPowerW ? ` (${fixed((100 * s.groundLossW) / inputPowerW, 1)} % of the input power)` : "";
     lines.push(`  ground loss          ${s.groundLossW.toExponential(3)} W per ${inputPowerW ? fixed(inputPowerW * 1000, 3) + " mW" : "input"} in${share}`);
   }
   lines.push(
-    "  model limits: image theory with plane-wave reflection coefficients; no surface wave; approximate for wires within a small fraction of a wavelength of real ground",
+    s.ground.type === "perfect"
+      ? "  model limits: image theory over an infinite perfect ground; a real ground absorbs power and lowers the low-angle field, and a grounded wire needs a radial system"
+      : "  model limits: image theory with plane-wave reflection coefficients; no surface wave; approximate for wires within a small fraction of a wavelength of real ground",
     "  caution: keep masts and wires well clear of power lines (more than the mast's height), ground the mast against lightning, keep people out of the near field of low wires when transmitting; follow local codes and licensed practice",
   );
   return lines;
