@@ -75,12 +75,13 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const mountedWords = request.ground ? `, ${request.mounting} over ${request.ground.type} ground` : "";
+  const mounting = request.mounting ?? "horizontal", objective = request.objective ?? "peak";
+  const mountedWords = request.ground ? `, ${mounting} over ${request.ground.type} ground` : "";
   const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz${mountedWords}` };
   const overGround = request.ground && {
-    mounting: request.mounting,
-    objective: request.objective,
-    elevationWindowDeg: ELEVATION_WINDOWS_DEG[request.objective],
+    mounting,
+    objective,
+    elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective],
     objectiveGainDbi: outcome.evaluation.gainDbi,
     feedHeightM: shape.wires[shape.feed.wire].pointsM[shape.feed.vertex][2],
   };

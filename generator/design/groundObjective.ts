@@ -20,7 +20,7 @@ export const ELEVATION_WINDOWS_DEG: Record<ElevationObjective, [number, number]>
 /** The free-space bent-arm shape placed over the request's ground (unchanged in free space). */
 export function groundedShape(shape: Shape, r: DesignRequest): Shape {
   if (!r.ground || r.heightM === undefined) return shape;
-  return { ...mountShape(shape, r.mounting, r.heightM), ground: r.ground };
+  return { ...mountShape(shape, r.mounting ?? "horizontal", r.heightM), ground: r.ground };
 }
 
 /**
@@ -29,5 +29,6 @@ export function groundedShape(shape: Shape, r: DesignRequest): Shape {
  */
 export function objectiveSolveOptions(r: DesignRequest): SolveOptions {
   if (!r.ground) return {};
-  return { energyBalance: false, ...(r.objective !== "peak" ? { elevationWindowDeg: ELEVATION_WINDOWS_DEG[r.objective] } : {}) };
+  const objective = r.objective ?? "peak";
+  return { energyBalance: false, ...(objective !== "peak" ? { elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective] } : {}) };
 }

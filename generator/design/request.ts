@@ -27,15 +27,16 @@ export const designRequestSchema = z
     seed: z.number().int("seed must be a whole number").min(0, "seed must be 0 or more").default(1),
     segmentsPerWavelength: positive("segmentsPerWavelength").optional(),
     maxEvaluations: z.number().int().positive().optional(),
-    // over ground (design/groundObjective.ts): absent = free space
+    // over ground (design/groundObjective.ts): absent = free space. No defaults here: a free-space
+    // request must parse to the same object as before, since the catalog hashes it
     ground: groundSchema.optional(),
     heightM: positive("heightM").optional(),
-    mounting: z.enum(MOUNTINGS, { error: `mounting must be one of ${MOUNTINGS.join(", ")}` }).default("horizontal"),
-    objective: z.enum(ELEVATION_OBJECTIVES, { error: `objective must be one of ${ELEVATION_OBJECTIVES.join(", ")}` }).default("peak"),
+    mounting: z.enum(MOUNTINGS, { error: `mounting must be one of ${MOUNTINGS.join(", ")}` }).optional(), // default horizontal
+    objective: z.enum(ELEVATION_OBJECTIVES, { error: `objective must be one of ${ELEVATION_OBJECTIVES.join(", ")}` }).optional(), // default peak
   })
   .superRefine((r, ctx) => {
     if (r.ground && r.heightM === undefined) ctx.addIssue({ code: "custom", path: ["heightM"], message: "a design over ground needs a height (--height-m)" });
-    if (!r.ground && (r.heightM !== undefined || r.objective !== "peak" || r.mounting !== "horizontal")) {
+    if (!r.ground && (r.heightM !== undefined || (r.objective ?? "peak") !== "peak" || (r.mounting ?? "horizontal") !== "horizontal")) {
       ctx.addIssue({ code: "custom", path: ["ground"], message: "a height, a mounting or an elevation objective needs a ground (--ground)" });
     }
     if (r.heightM !== undefined && r.heightM < 5 * r.wireDiameterM) {
