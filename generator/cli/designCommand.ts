@@ -119,6 +119,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   ];
   if (overGround) {
     const [lo, hi] = overGround.elevationWindowDeg;
+    if (mounting === "vertical") lines.push("vertical mounting: the wire hangs in a vertical plane and the symmetry axis points straight down from the feed");
     lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
   }
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
