@@ -1,7 +1,8 @@
-// `npm run bench [-- --json] [-- --only solver|optimizer|analysis|catalog]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|catalog]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
+import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchSolver } from "./solver.js";
 
@@ -23,6 +24,15 @@ if (wants("solver")) {
     for (const c of cases) {
       console.log(`${String(c.unknowns).padEnd(9)} ${ms(c.fillMs).padEnd(8)} ${ms(c.solveMs).padEnd(8)} ${ms(c.peakMs).padEnd(8)} ${ms(c.totalMs).padEnd(8)} | ${ms(c.realFormSolveMs)}`);
     }
+  }
+}
+
+if (wants("ground")) {
+  const cases = [...benchGround(), ...benchGroundObjective()];
+  out.ground = cases;
+  if (!json) {
+    console.log("\nover ground beside free space (solveShape, median of 40 runs after 5 warm-up runs; CPU s per solve)");
+    for (const c of cases) console.log(`${c.name.padEnd(52)} ${String(c.unknowns).padEnd(4)} ${ms(c.medianMs).padEnd(9)} ms  ${c.cpuSPerSolve.toFixed(4)} s`);
   }
 }
 

@@ -12,6 +12,8 @@ import { DEG_PER_RAD } from "../units.js";
 import { solutionSummary, summaryText } from "./analyzeCommand.js";
 import { designOffCentreCommand } from "./designOffCentreCommand.js";
 import { fixed, table } from "./format.js";
+import type { Ground } from "../em/ground.js";
+import { ELEVATION_WINDOWS_DEG } from "../design/groundObjective.js";
 
 export interface DesignFlags {
   freqMhz?: number;
@@ -26,6 +28,10 @@ export interface DesignFlags {
   out?: string;
   /** "centre" (default) or "off-centre" (designOffCentreCommand.ts). */
   family?: string;
+  ground?: Ground;
+  heightM?: number;
+  mounting?: string;
+  objective?: string;
 }
 
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
@@ -42,6 +48,10 @@ export function requestFromFlags(flags: DesignFlags): DesignRequest {
       variant: flags.variant,
       bandHz: flags.bandMhz,
       seed: flags.seed,
+      ground: flags.ground,
+      heightM: flags.heightM,
+      mounting: flags.mounting,
+      objective: flags.objective,
     },
     "design",
   );
@@ -62,14 +72,26 @@ export function parametersReport(x: number[], r: DesignRequest) {
 
 export async function designCommand(flags: DesignFlags): Promise<void> {
   const request = requestFromFlags(flags);
-  if (flags.family === "off-centre") return designOffCentreCommand(request, flags);
+  if (flags.family === "off-centre") {
+    if (request.ground) throw new InputError("design: --family off-centre is computed in free space only for now; leave out --ground and --height-m");
+    return designOffCentreCommand(request, flags);
+  }
   const bar = process.stderr.isTTY && !flags.json ? new SingleBar({ format: "designing [{bar}] {value}/{total} evaluations, best {best} dBi", stream: process.stderr, hideCursor: true }) : null;
   const budget = request.maxEvaluations ?? 500 * (2 * request.piecesPerArm - 1) + 500;
   bar?.start(budget + 60 * (2 * request.piecesPerArm - 1), 0, { best: "–" });
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
+  const mounting = request.mounting ?? "horizontal", objective = request.objective ?? "peak";
+  const mountedWords = request.ground ? `, ${mounting} over ${request.ground.type} ground` : "";
+  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz${mountedWords}` };
+  const overGround = request.ground && {
+    mounting,
+    objective,
+    elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective],
+    objectiveGainDbi: outcome.evaluation.gainDbi,
+    feedHeightM: shape.wires[shape.feed.wire].pointsM[shape.feed.vertex][2],
+  };
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   const parameters = parametersReport(outcome.x, request);
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
@@ -83,6 +105,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     evaluations: outcome.evaluations,
     seed: request.seed,
     stopReasons: outcome.stopReasons,
+    ...overGround,
     shape,
   };
   if (flags.json) {
@@ -101,6 +124,11 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     "right arm, from the feed outward (the left arm is its mirror image):",
     table(rows),
   ];
+  if (overGround) {
+    const [lo, hi] = overGround.elevationWindowDeg;
+    if (mounting === "vertical") lines.push("vertical mounting: the wire hangs in a vertical plane and the symmetry axis points straight down from the feed");
+    lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
+  }
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
   if (flags.out) lines.push(`shape written to ${flags.out}`);
   process.stdout.write(`${lines.join("\n")}\n`);

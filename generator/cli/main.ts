@@ -7,6 +7,9 @@ import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCom
 import { designCommand } from "./designCommand.js";
 import { bandMhz, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { VARIANTS } from "../design/request.js";
+import { GROUND_FLAG_HELP, groundName, heightM } from "./groundOptions.js";
+import { MOUNTINGS } from "../shapes/mounting.js";
+import { ELEVATION_OBJECTIVES } from "../design/groundObjective.js";
 
 const program = new Command("bentwire")
   .description("Bent-wire antenna designs: solve, optimize, analyze and catalog")
@@ -23,6 +26,8 @@ program
   .option("--line-ohm <Z0>", "feed line impedance in Ω", positiveNumber("--line-ohm"), 50)
   .option("--tolerance-samples <N>", "bent copies in the tolerance study", wholeNumber("--tolerance-samples", 1, 100000), 64)
   .option("--seed <S>", "seed of the tolerance study", wholeNumber("--seed", 0, 2 ** 31 - 1), 1)
+  .option("--ground <name>", GROUND_FLAG_HELP, groundName("--ground"))
+  .option("--height-m <H>", "lift the shape so its lowest point is H metres above the ground", heightM("--height-m"))
   .action((shape: string, opts) => analyzeCommand(shape, opts));
 
 program
@@ -39,6 +44,10 @@ program
   .option("--json", "print one JSON object")
   .option("--out <file>", "write the winning shape as a shape file")
   .option("--family <name>", "centre (mirror-image arms) or off-centre (the feed point's place along the wire is searched too)", oneOf("--family", ["centre", "off-centre"] as const), "centre")
+  .option("--ground <name>", `${GROUND_FLAG_HELP.replace(/ \(default.*$/, "")} (default free space)`, groundName("--ground"))
+  .option("--height-m <H>", "over ground: height of the wire plane (horizontal) or of the lowest point (vertical), metres", heightM("--height-m"))
+  .option("--mounting <m>", "over ground: horizontal (wire plane level at the height) or vertical (feed at the top of one mast, ends tied down)", oneOf("--mounting", MOUNTINGS), "horizontal")
+  .option("--objective <o>", "over ground: peak, long-distance (best gain at 5–25° elevation) or near-vertical (60–90°)", oneOf("--objective", ELEVATION_OBJECTIVES), "peak")
   .action((opts) => designCommand(opts));
 
 program

@@ -12,6 +12,7 @@ import { toShape, unpack, type BentArmSpec } from "../shapes/bentArm.js";
 import { constraintViolation } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
 import { bandOf, limitsOf, type DesignRequest } from "./request.js";
+import { groundedShape, objectiveSolveOptions } from "./groundObjective.js";
 
 export const GEOMETRY_PENALTY = 1000;
 export const SWR_PENALTY = 100;
@@ -28,12 +29,12 @@ export function specOf(r: DesignRequest): BentArmSpec {
 }
 
 export function shapeOf(x: readonly number[], r: DesignRequest, frequencyHz = r.frequencyHz): Shape {
-  return toShape(unpack(x, r.piecesPerArm), specOf(r), {
+  return groundedShape(toShape(unpack(x, r.piecesPerArm), specOf(r), {
     frequencyHz,
     wireRadiusM: r.wireDiameterM / 2,
     conductor: r.conductor,
     segmentsPerWavelength: r.segmentsPerWavelength,
-  });
+  }), r); // over ground: mounted as the request says
 }
 
 export { swr as swrOf } from "../analysis/swr.js";
@@ -48,7 +49,7 @@ export function evaluate(x: readonly number[], r: DesignRequest, swrFrequenciesH
   const violation = constraintViolation(unpack(x, r.piecesPerArm), specOf(r), limitsOf(r), wavelengthM(r.frequencyHz), r.wireDiameterM / 2);
   if (violation.total > 0) return { score: GEOMETRY_PENALTY + violation.total, gainDbi: null, maxSwr: null, reasons: violation.reasons };
   try {
-    const solution = solveShape(shapeOf(x, r));
+    const solution = solveShape(shapeOf(x, r), objectiveSolveOptions(r)); // over ground: peak in the objective's window
     const gainDbi = solution.peakGainDbi;
     if (r.variant === "max-gain") return { score: -gainDbi, gainDbi, maxSwr: null, reasons: [] };
     let maxSwr = 0;

@@ -3,6 +3,9 @@ import { z } from "zod";
 import { conductorSchema } from "../em/shapeFile.js";
 import { InputError } from "../errors.js";
 import { DEFAULT_LIMITS, type BentArmLimits } from "../shapes/constraints.js";
+import { groundSchema } from "../em/ground.js";
+import { MOUNTINGS } from "../shapes/mounting.js";
+import { ELEVATION_OBJECTIVES } from "./groundObjective.js";
 
 export const VARIANTS = ["max-gain", "direct-feed"] as const;
 export type Variant = (typeof VARIANTS)[number];
@@ -24,8 +27,21 @@ export const designRequestSchema = z
     seed: z.number().int("seed must be a whole number").min(0, "seed must be 0 or more").default(1),
     segmentsPerWavelength: positive("segmentsPerWavelength").optional(),
     maxEvaluations: z.number().int().positive().optional(),
+    // over ground (design/groundObjective.ts): absent = free space. No defaults here: a free-space
+    // request must parse to the same object as before, since the catalog hashes it
+    ground: groundSchema.optional(),
+    heightM: positive("heightM").optional(),
+    mounting: z.enum(MOUNTINGS, { error: `mounting must be one of ${MOUNTINGS.join(", ")}` }).optional(), // default horizontal
+    objective: z.enum(ELEVATION_OBJECTIVES, { error: `objective must be one of ${ELEVATION_OBJECTIVES.join(", ")}` }).optional(), // default peak
   })
   .superRefine((r, ctx) => {
+    if (r.ground && r.heightM === undefined) ctx.addIssue({ code: "custom", path: ["heightM"], message: "a design over ground needs a height (--height-m)" });
+    if (!r.ground && (r.heightM !== undefined || (r.objective ?? "peak") !== "peak" || (r.mounting ?? "horizontal") !== "horizontal")) {
+      ctx.addIssue({ code: "custom", path: ["ground"], message: "a height, a mounting or an elevation objective needs a ground (--ground)" });
+    }
+    if (r.heightM !== undefined && r.heightM < 5 * r.wireDiameterM) {
+      ctx.addIssue({ code: "custom", path: ["heightM"], message: `height must be at least 5 wire diameters (${5 * r.wireDiameterM} m)` });
+    }
     if (r.bandHz) {
       const [lo, hi] = r.bandHz;
       if (!(lo < hi)) ctx.addIssue({ code: "custom", path: ["bandHz"], message: `band low edge must be below its high edge (got ${lo} ≥ ${hi})` });

@@ -2,6 +2,8 @@
 // becomes one line naming the field and the rule (see InputError).
 import { z } from "zod";
 import { InputError } from "../errors.js";
+import { groundSchema } from "./ground.js";
+import { checkGroundShape, isGroundedFeed } from "./groundShape.js";
 
 const finite = (what: string) =>
   z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
@@ -39,6 +41,8 @@ export const shapeSchema = z.strictObject({
     wire: z.number().int("feed.wire must be a whole number").nonnegative(),
     vertex: z.number().int("feed.vertex must be a whole number").nonnegative(),
   }),
+  /** Absent: free space. Else the plane z = 0, perfect or real (em/ground.ts). */
+  ground: groundSchema.optional(),
 });
 
 export type ShapeFile = z.input<typeof shapeSchema>;
@@ -88,6 +92,8 @@ export function validateShape(raw: unknown, label = "shape"): Shape {
       `${label}: feed.wire must name one of the ${shape.wires.length} wires (0..${shape.wires.length - 1}) (got ${shape.feed.wire})`,
     );
   }
+  checkGroundShape(shape, label);
+  if (isGroundedFeed(shape)) return shape; // base feed at a wire end on perfect ground
   const last = wire.pointsM.length - 1;
   if (last < 2) {
     throw new InputError(

@@ -10,6 +10,10 @@ import { checkMesh } from "./geometryChecks.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
 import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
+import { imageFactor } from "./ground.js";
+import { addImageCoupling } from "./groundImage.js";
+import { withGroundedEnds } from "./groundMesh.js";
+import { solutionOverGround, type GroundFigures } from "./groundSolve.js";
 import { DEFAULT_PEAK_OPTIONS, findPeak, integratePattern, patternPointsFor, type PeakOptions } from "./pattern.js";
 import type { Conductor, Shape } from "./shapeFile.js";
 
@@ -17,9 +21,12 @@ export const SOLVER_VERSION = "bentwire-em-1";
 
 export interface SolveOptions {
   segmentsPerWavelength?: number;
+  /** Free space and perfect ground: integrate the pattern. Real ground integrates unless false. */
   energyBalance?: boolean;
   peak?: PeakOptions;
   rules?: KernelRules;
+  /** Over ground only: search the peak within these elevations (degrees), e.g. [5, 25]. */
+  elevationWindowDeg?: [number, number];
 }
 
 export interface Solution {
@@ -40,6 +47,8 @@ export interface Solution {
   peakDirectionRad: { theta: number; phi: number };
   energyBalanceError: number | null;
   warnings: string[];
+  /** Over ground only (shape.ground set): elevation figures, ground loss. */
+  ground?: GroundFigures;
 }
 
 export function conductivityOf(conductor: Conductor): number {
@@ -61,10 +70,11 @@ export interface FeedSolution {
 
 /** Currents and input impedance only: what a band sweep needs at frequencies off the design one. */
 export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolution {
-  const mesh = buildMesh(shape, options.segmentsPerWavelength);
+  const mesh = withGroundedEnds(buildMesh(shape, options.segmentsPerWavelength), shape); // no-op in free space
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
   const z = fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
+  if (shape.ground) addImageCoupling(z, mesh, k, imageFactor(shape.ground, shape.frequencyHz), options.rules ?? KERNEL_RULES);
   const sigma = conductivityOf(shape.conductor);
   const rPerM = new Float64Array(mesh.segmentCount);
   if (Number.isFinite(sigma)) {
@@ -92,6 +102,7 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
 export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
   const feed = solveFeed(shape, options);
   const { mesh, currentRe: re, currentIm: im, inputPowerW, kRadPerM: k } = feed;
+  if (shape.ground) return solutionOverGround(shape, feed, options);
   const radiatedPowerW = inputPowerW - feed.lossPowerW;
   const farField = createFarFieldPlan(mesh, re, im, k);
   const peak = findPeak(farField, options.peak ?? DEFAULT_PEAK_OPTIONS);

@@ -1,0 +1,24 @@
+// How a bent-arm shape (drawn in the x–y plane, feed at the origin, symmetry axis +y) is hung over
+// the ground plane z = 0:
+//   horizontal: the wire plane horizontal at height H:          (x, y, 0) → (x, y, H)
+//   vertical:   the wire plane vertical (the x–z plane), feed at the top of one mast, the arms
+//               running down from it to tie-down points:        (x, y, 0) → (x, 0, z_feed − y),
+//               z_feed = H + max y, so the lowest point is exactly at the stated minimum height H.
+// The mast height of the vertical mounting (z_feed) follows from the shape and is reported with it.
+import type { Shape, Vec3 } from "../em/index.js";
+
+export const MOUNTINGS = ["horizontal", "vertical"] as const;
+export type Mounting = (typeof MOUNTINGS)[number];
+
+/** Feed height above the ground (m) for the mounting: H, or H + the arms' drop for vertical. */
+export function feedHeightM(shape: Shape, mounting: Mounting, heightM: number): number {
+  if (mounting === "horizontal") return heightM;
+  return heightM + Math.max(...shape.wires.flatMap((w) => w.pointsM.map((p) => p[1])));
+}
+
+/** The free-space shape moved over the ground as mounted (the ground field is set by the caller). */
+export function mountShape(shape: Shape, mounting: Mounting, heightM: number): Shape {
+  const top = feedHeightM(shape, mounting, heightM);
+  const place = ([x, y, z]: Vec3): Vec3 => (mounting === "horizontal" ? [x, y, z + heightM] : [x, z, top - y]);
+  return { ...shape, wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map(place) })) };
+}
