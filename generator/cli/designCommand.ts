@@ -2,19 +2,19 @@
 // pieces, and reports it like `analyze` does, plus the parameters and the optimizer's record.
 import { SingleBar } from "cli-progress";
 import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
-import { shapeOf } from "../design/objective.js";
-import { parseDesignRequest, type DesignRequest } from "../design/request.js";
-import { solveShape } from "../em/index.js";
-import { InputError } from "../errors.js";
+import { designResult, parametersReport } from "../design/designResult.js";
+import type { DesignRequest } from "../design/request.js";
+import { requestFromInputs } from "../design/requestInput.js";
 import { writeFileAtomic } from "../fsAtomic.js";
-import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
-import { DEG_PER_RAD } from "../units.js";
-import { solutionSummary, summaryText } from "./analyzeCommand.js";
+import { summaryText } from "./analyzeCommand.js";
 import { fixed, table } from "./format.js";
+
+export { parametersReport };
 
 export interface DesignFlags {
   freqMhz?: number;
   lengthWl?: number;
+  lengthM?: number;
   pieces?: number;
   wireDiameterMm: number;
   conductor: string;
@@ -26,35 +26,7 @@ export interface DesignFlags {
 }
 
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
-  if (flags.freqMhz === undefined) throw new InputError("design: --freq-mhz is required");
-  if (flags.lengthWl === undefined) throw new InputError("design: --length-wl is required");
-  if (flags.pieces === undefined) throw new InputError("design: --pieces is required");
-  const request = parseDesignRequest(
-    {
-      frequencyHz: flags.freqMhz * 1e6,
-      lengthWl: flags.lengthWl,
-      piecesPerArm: flags.pieces,
-      wireDiameterM: flags.wireDiameterMm / 1000,
-      conductor: flags.conductor,
-      variant: flags.variant,
-      bandHz: flags.bandMhz,
-      seed: flags.seed,
-    },
-    "design",
-  );
-  return request;
-}
-
-/** The parameters in the units a builder reads. */
-export function parametersReport(x: number[], r: DesignRequest) {
-  const p = unpack(x, r.piecesPerArm);
-  const lengths = pieceLengthsM(p, { piecesPerArm: r.piecesPerArm, wireLengthM: (r.lengthWl * 299_792_458) / r.frequencyHz });
-  return {
-    vector: x,
-    firstAngleDeg: p.firstAngleRad * DEG_PER_RAD,
-    bendAnglesDeg: p.bendAnglesRad.map((b) => b * DEG_PER_RAD),
-    pieceLengthsM: lengths,
-  };
+  return requestFromInputs({ ...flags, bandHz: flags.bandMhz });
 }
 
 export async function designCommand(flags: DesignFlags): Promise<void> {
@@ -65,22 +37,9 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
-  const parameters = parametersReport(outcome.x, request);
+  const result = designResult(request, outcome);
+  const { shape, parameters } = result;
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
-  const result = {
-    status: outcome.status,
-    message: outcome.message,
-    variant: request.variant,
-    ...summary,
-    maxSwrInBand: outcome.evaluation.maxSwr,
-    parameters,
-    evaluations: outcome.evaluations,
-    seed: request.seed,
-    stopReasons: outcome.stopReasons,
-    shape,
-  };
   if (flags.json) {
     process.stdout.write(`${JSON.stringify(result)}\n`);
     return;
@@ -92,7 +51,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   });
   const lines = [
     `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
-    summaryText(shape.name, summary),
+    summaryText(shape.name, result),
     "",
     "right arm, from the feed outward (the left arm is its mirror image):",
     table(rows),
