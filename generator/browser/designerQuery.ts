@@ -5,11 +5,9 @@
 import { InputError } from "../errors.js";
 import type { DesignRequest } from "../design/request.js";
 import { requestFromInputs, type DesignInputs, type InputNames } from "../design/requestInput.js";
+import { QUERY_KEYS, type FormState, type QueryKey } from "./designerLinks.js";
 
-/** Query keys, in the order a link writes them. Ground fields join here once the solver has ground. */
-export const QUERY_KEYS = ["freqMhz", "bandMhz", "lengthWl", "lengthM", "pieces", "variant", "wireDiameterMm", "conductor", "seed"] as const;
-export type QueryKey = (typeof QUERY_KEYS)[number];
-export type FormState = Record<QueryKey, string>;
+export { queryOf, QUERY_KEYS, type FormState, type QueryKey } from "./designerLinks.js";
 
 /** What the form shows before anyone types: the CLI's defaults where it has them. */
 export const DEFAULT_STATE: FormState = {
@@ -29,14 +27,6 @@ export function stateFromQuery(search: string): FormState {
     if (v !== null) state[k] = v.trim().slice(0, MAX_FIELD_CHARS);
   }
   return state;
-}
-
-/** The query string of a state: empty fields left out; `run` adds run=1. */
-export function queryOf(state: FormState, run = false): string {
-  const q = new URLSearchParams();
-  for (const k of QUERY_KEYS) if (state[k].trim() !== "") q.set(k, state[k].trim());
-  if (run) q.set("run", "1");
-  return q.toString();
 }
 
 export const wantsRun = (search: string): boolean => new URLSearchParams(search).get("run") === "1";
