@@ -13,7 +13,8 @@ export function queryOf(state: FormState, run = false): string {
   const q = new URLSearchParams();
   for (const k of QUERY_KEYS) if (state[k].trim() !== "") q.set(k, state[k].trim());
   if (run) q.set("run", "1");
-  return q.toString();
+  // a colon may stand as it is in a query (RFC 3986 §3.4): bandMhz=144:146 stays readable
+  return q.toString().replace(/%3A/gi, ":");
 }
 
 export const customHref = (base: string, state: FormState): string => `${at(base, "custom/")}?${queryOf(state)}`;
