@@ -6,7 +6,6 @@
 import { execFile } from "node:child_process";
 import { mkdirSync, readFileSync, readdirSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { runInNewContext } from "node:vm";
 import { promisify } from "node:util";
 import DxfParser from "dxf-parser";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -99,15 +98,21 @@ describe("designer page", () => {
     expect(maxDiff(nodes(web), nodes(cliResult))).toBeLessThan(1e-9);
   });
 
-  it("the worker bundle is the CLI's code: run under Node it gives the CLI's result bit for bit", () => {
+  it("the worker bundle is the CLI's code: run under Node it gives the CLI's result bit for bit", async () => {
     const worker = readdirSync(join(site.dir, "_astro")).find((n) => /^designer-.*\.js$/.test(n));
     expect(worker, "worker bundle in _astro/").toBeDefined();
-    let done: Record<string, any> | null = null;
-    const self: Record<string, unknown> = { postMessage: (m: { type: string; result?: Record<string, any> }) => { if (m.type === "done") done = m.result!; } };
-    runInNewContext(readFileSync(join(site.dir, "_astro", worker!), "utf8"), { self, TextEncoder, console });
+    // a plain Node process stands in for the worker's global scope: `self` with postMessage
+    const runner = join(CACHE, "designer-bundle-runner.mjs");
+    writeFileSync(runner, [
+      "import { pathToFileURL } from 'node:url';",
+      "globalThis.self = globalThis;",
+      "self.postMessage = (m) => { if (m.type === 'done') process.stdout.write(JSON.stringify(m.result)); if (m.type === 'error') process.stderr.write(m.message); };",
+      "await import(pathToFileURL(process.argv[2]).href);",
+      "self.onmessage({ data: { request: JSON.parse(process.argv[3]) } });",
+    ].join("\n"));
     const request = { frequencyHz: 145e6, lengthWl: 1.5, piecesPerArm: 1, wireDiameterM: 0.002, conductor: "copper", variant: "max-gain", bandHz: [144e6, 146e6], lineImpedanceOhm: 50, swrLimit: 2, seed: 1 };
-    (self.onmessage as (e: { data: unknown }) => void)({ data: { request } });
-    expect(JSON.parse(JSON.stringify(done))).toEqual(cliResult);
+    const { stdout } = await promisify(execFile)(process.execPath, [runner, join(site.dir, "_astro", worker!), JSON.stringify(request)], { maxBuffer: 1 << 26 });
+    expect(JSON.parse(stdout)).toEqual(cliResult);
   }, 300_000);
 
   it("downloads made in the page parse, and the shape file loads into analyze with the same figures", async () => {
