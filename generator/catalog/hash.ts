@@ -1,7 +1,7 @@
 // Canonical JSON, rounding and hashes for catalog entries. Canonical form: object keys sorted,
 // no whitespace, numbers as JavaScript prints them (shortest round-trip), non-finite numbers as null.
 // Rounding keeps entries small and stable: 7 significant digits (≈ 0.1 µm on a 1 m piece).
-import { createHash } from "node:crypto";
+import { sha256Hex } from "../export/checksums.js";
 
 export const SIGNIFICANT_DIGITS = 7;
 
@@ -32,4 +32,8 @@ export function canonicalJson(value: unknown): string {
   return `{${keys.map((k) => `${JSON.stringify(k)}:${canonicalJson((value as Record<string, unknown>)[k])}`).join(",")}}`;
 }
 
-export const sha256 = (text: string): string => createHash("sha256").update(text).digest("hex");
+/** Pure JS (no node:crypto), so entries can also be built in the browser designer. */
+export const sha256 = (text: string): string => sha256Hex(text);
+
+/** The text of a catalog file: one line of JSON (pure, so the browser designer writes the same). */
+export const serialize = (value: unknown): string => `${JSON.stringify(value)}\n`;

@@ -8,14 +8,14 @@ import { writeFileAtomic } from "../fsAtomic.js";
 import type { ReferenceResult } from "./compute.js";
 import { contentHashOf } from "./entryBuild.js";
 import { entrySchema, type Entry } from "./entrySchema.js";
-import { canonicalJson, sha256 } from "./hash.js";
+import { canonicalJson, serialize, sha256 } from "./hash.js";
 
 export type Checked<T> = { ok: true; value: T } | { ok: false; problem: string };
 
 export const entryFile = (dir: string, id: string): string => join(dir, `${id}.json`);
 export const referenceDir = (entriesDir: string): string => join(entriesDir, "references");
 
-export const serialize = (value: unknown): string => `${JSON.stringify(value)}\n`;
+export { serialize };
 
 export function checkEntryText(text: string, label: string): Checked<Entry> {
   let raw: unknown;

@@ -1,8 +1,8 @@
 // `analyze <shape.json>`: solves one shape and reports its figures, readable or as one JSON object.
 import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
-import { parseShape, solveShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { solutionSummary, type SolutionSummary } from "../analysis/solutionSummary.js";
+import { parseShape, solveShape, type Shape } from "../em/index.js";
 import { analysisText } from "./analysisText.js";
-import { DEG_PER_RAD } from "../units.js";
 import { readInputFile } from "./errors.js";
 import { complexText, fixed } from "./format.js";
 import { applyGroundFlags, groundSummary, groundText } from "./groundOptions.js";
@@ -20,28 +20,7 @@ export interface AnalyzeOptions {
   heightM?: number;
 }
 
-/** The figures every analysis reports (the JSON contract of `analyze --json`). */
-export function solutionSummary(solution: Solution) {
-  return {
-    solverVersion: SOLVER_VERSION,
-    frequencyHz: solution.frequencyHz,
-    unknowns: solution.unknowns,
-    segments: solution.segments,
-    inputImpedanceOhm: solution.inputImpedanceOhm,
-    peakGainDbi: solution.peakGainDbi,
-    peakDirectivityDbi: solution.peakDirectivityDbi,
-    radiationEfficiency: solution.radiationEfficiency,
-    peakDirection: {
-      thetaDeg: solution.peakDirectionRad.theta * DEG_PER_RAD,
-      phiDeg: solution.peakDirectionRad.phi * DEG_PER_RAD,
-    },
-    energyBalanceError: solution.energyBalanceError,
-    warnings: solution.warnings,
-    ...groundSummary(solution),
-  };
-}
-
-export type SolutionSummary = ReturnType<typeof solutionSummary>;
+export { solutionSummary, type SolutionSummary };
 
 export function summaryText(label: string, s: SolutionSummary): string {
   const lines = [

@@ -2,22 +2,22 @@
 // pieces, and reports it like `analyze` does, plus the parameters and the optimizer's record.
 import { SingleBar } from "cli-progress";
 import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
-import { shapeOf } from "../design/objective.js";
-import { parseDesignRequest, type DesignRequest } from "../design/request.js";
-import { solveShape } from "../em/index.js";
-import { InputError } from "../errors.js";
+import { designResult, overGroundReport, parametersReport } from "../design/designResult.js";
+import type { DesignRequest } from "../design/request.js";
+import { requestFromInputs } from "../design/requestInput.js";
 import { writeFileAtomic } from "../fsAtomic.js";
-import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
-import { DEG_PER_RAD } from "../units.js";
-import { solutionSummary, summaryText } from "./analyzeCommand.js";
+import { summaryText } from "./analyzeCommand.js";
 import { designOffCentreCommand } from "./designOffCentreCommand.js";
 import { fixed, table } from "./format.js";
 import type { Ground } from "../em/ground.js";
-import { ELEVATION_WINDOWS_DEG } from "../design/groundObjective.js";
+import { InputError } from "../errors.js";
+
+export { parametersReport };
 
 export interface DesignFlags {
   freqMhz?: number;
   lengthWl?: number;
+  lengthM?: number;
   pieces?: number;
   wireDiameterMm: number;
   conductor: string;
@@ -35,39 +35,7 @@ export interface DesignFlags {
 }
 
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
-  if (flags.freqMhz === undefined) throw new InputError("design: --freq-mhz is required");
-  if (flags.lengthWl === undefined) throw new InputError("design: --length-wl is required");
-  if (flags.pieces === undefined) throw new InputError("design: --pieces is required");
-  const request = parseDesignRequest(
-    {
-      frequencyHz: flags.freqMhz * 1e6,
-      lengthWl: flags.lengthWl,
-      piecesPerArm: flags.pieces,
-      wireDiameterM: flags.wireDiameterMm / 1000,
-      conductor: flags.conductor,
-      variant: flags.variant,
-      bandHz: flags.bandMhz,
-      seed: flags.seed,
-      ground: flags.ground,
-      heightM: flags.heightM,
-      mounting: flags.mounting,
-      objective: flags.objective,
-    },
-    "design",
-  );
-  return request;
-}
-
-/** The parameters in the units a builder reads. */
-export function parametersReport(x: number[], r: DesignRequest) {
-  const p = unpack(x, r.piecesPerArm);
-  const lengths = pieceLengthsM(p, { piecesPerArm: r.piecesPerArm, wireLengthM: (r.lengthWl * 299_792_458) / r.frequencyHz });
-  return {
-    vector: x,
-    firstAngleDeg: p.firstAngleRad * DEG_PER_RAD,
-    bendAnglesDeg: p.bendAnglesRad.map((b) => b * DEG_PER_RAD),
-    pieceLengthsM: lengths,
-  };
+  return requestFromInputs({ ...flags, bandHz: flags.bandMhz });
 }
 
 export async function designCommand(flags: DesignFlags): Promise<void> {
@@ -82,32 +50,9 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const mounting = request.mounting ?? "horizontal", objective = request.objective ?? "peak";
-  const mountedWords = request.ground ? `, ${mounting} over ${request.ground.type} ground` : "";
-  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz${mountedWords}` };
-  const overGround = request.ground && {
-    mounting,
-    objective,
-    elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective],
-    objectiveGainDbi: outcome.evaluation.gainDbi,
-    feedHeightM: shape.wires[shape.feed.wire].pointsM[shape.feed.vertex][2],
-  };
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
-  const parameters = parametersReport(outcome.x, request);
+  const result = designResult(request, outcome);
+  const { shape, parameters } = result;
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
-  const result = {
-    status: outcome.status,
-    message: outcome.message,
-    variant: request.variant,
-    ...summary,
-    maxSwrInBand: outcome.evaluation.maxSwr,
-    parameters,
-    evaluations: outcome.evaluations,
-    seed: request.seed,
-    stopReasons: outcome.stopReasons,
-    ...overGround,
-    shape,
-  };
   if (flags.json) {
     process.stdout.write(`${JSON.stringify(result)}\n`);
     return;
@@ -119,14 +64,15 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   });
   const lines = [
     `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
-    summaryText(shape.name, summary),
+    summaryText(shape.name, result),
     "",
     "right arm, from the feed outward (the left arm is its mirror image):",
     table(rows),
   ];
+  const overGround = overGroundReport(request, outcome, shape);
   if (overGround) {
     const [lo, hi] = overGround.elevationWindowDeg;
-    if (mounting === "vertical") lines.push("vertical mounting: the wire hangs in a vertical plane and the symmetry axis points straight down from the feed");
+    if (overGround.mounting === "vertical") lines.push("vertical mounting: the wire hangs in a vertical plane and the symmetry axis points straight down from the feed");
     lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
   }
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);

@@ -7,6 +7,9 @@ import { validateShape, type Shape } from "../em/index.js";
 import type { Solution } from "../em/solve.js";
 import { InputError } from "../errors.js";
 import { fixed } from "./format.js";
+import { groundSummary, type GroundSummary } from "../analysis/solutionSummary.js";
+
+export { groundSummary, type GroundSummary };
 
 export const GROUND_FLAG_HELP = `ground under the shape: ${GROUND_NAMES.join(", ")} (default: the shape file's, else free space)`;
 
@@ -45,33 +48,6 @@ export function applyGroundFlags(shape: Shape, flags: { ground?: Ground; heightM
   return validateShape({ ...shape, wires, ground }, label);
 }
 
-/** The ground figures for --json (absent in free space). */
-export function groundSummary(solution: Solution) {
-  const g = solution.ground;
-  if (!g) return {};
-  return {
-    ground: g.ground,
-    inputPowerW: solution.inputPowerW,
-    peakElevationDeg: g.peakElevationDeg,
-    peakAzimuthDeg: g.peakAzimuthDeg,
-    gainAtElevationDbi: g.gainAtElevationDbi,
-    elevationCut: g.elevationCut,
-    upperHalfPowerW: g.upperHalfPowerW,
-    groundLossW: g.groundLossW,
-    lowestPointM: lowestPointM(solution),
-  };
-}
-
-function lowestPointM(solution: Solution): number {
-  const m = solution.mesh;
-  let low = Infinity;
-  for (let s = 0; s < m.segmentCount; s++) {
-    low = Math.min(low, m.start[3 * s + 2], m.start[3 * s + 2] + m.dir[3 * s + 2] * m.lengthM[s]);
-  }
-  return low;
-}
-
-export type GroundSummary = ReturnType<typeof groundSummary>;
 
 const groundWords = (g: Ground) =>
   g.type === "perfect" ? "perfect ground" : `real ground, ε_r ${g.relativePermittivity}, σ ${g.conductivitySPerM} S/m`;

@@ -35,6 +35,7 @@ program
   .description("find the bent-arm shape with the most gain for a frequency, wire length and pieces per arm")
   .option("--freq-mhz <F>", "design frequency in MHz", positiveNumber("--freq-mhz"))
   .option("--length-wl <L>", "wire length, tip to tip, in wavelengths", positiveNumber("--length-wl"))
+  .option("--length-m <L>", "or the wire length, tip to tip, in metres", positiveNumber("--length-m"))
   .option("--pieces <K>", "straight pieces per arm (1 = straight wire or V)", wholeNumber("--pieces", 1, 8))
   .option("--wire-diameter-mm <D>", "wire diameter in mm", positiveNumber("--wire-diameter-mm"), 2)
   .option("--conductor <name>", "perfect, copper or aluminium", oneOf("--conductor", ["perfect", "copper", "aluminium"] as const), "copper")

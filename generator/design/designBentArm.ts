@@ -29,6 +29,8 @@ export interface DesignOutcome {
 export interface DesignProgress {
   evaluations: number;
   bestGainDbi: number | null;
+  /** Parameters of the best feasible shape so far (for a live drawing), null before one is found. */
+  bestX: number[] | null;
 }
 
 export function designBentArm(
@@ -43,12 +45,14 @@ export function designBentArm(
   const polishFrequencies = checkFrequencies(r, SWEEP_POINTS_IN_BAND);
   let evaluations = 0;
   let bestGain: number | null = null;
+  let bestX: number[] | null = null;
   const score = (z: readonly number[], freqs: number[], limit: number) => {
-    const e = evaluate(toX(z), r, freqs, limit);
+    const x = toX(z);
+    const e = evaluate(x, r, freqs, limit);
     evaluations++;
     const improved = e.score < 0 && (bestGain === null || -e.score > bestGain);
-    if (improved) bestGain = -e.score;
-    if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain });
+    if (improved) [bestGain, bestX] = [-e.score, x];
+    if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain, bestX });
     return e.score;
   };
 

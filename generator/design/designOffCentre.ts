@@ -26,12 +26,14 @@ export function designOffCentre(r: DesignRequest, options: { start?: number[]; o
   const polishFrequencies = checkFrequencies(r, SWEEP_POINTS_IN_BAND);
   let evaluations = 0;
   let bestGain: number | null = null;
+  let bestX: number[] | null = null;
   const score = (z: readonly number[], freqs: number[], limit: number) => {
-    const e = evaluateOffCentre(toX(z), r, freqs, limit);
+    const x = toX(z);
+    const e = evaluateOffCentre(x, r, freqs, limit);
     evaluations++;
     const improved = e.score < 0 && (bestGain === null || -e.score > bestGain);
-    if (improved) bestGain = -e.score;
-    if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain });
+    if (improved) [bestGain, bestX] = [-e.score, [...x]];
+    if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain, bestX });
     return e.score;
   };
   const zStart = options.start ? toZ(options.start).map(clamp01) : null;

@@ -1,12 +1,15 @@
 // A checksum listing in the usual "sha256sum" text layout: "<64 hex digits>  <name>\n" per file,
 // sorted by name (plain code-unit order, so the result never depends on locale).
-import { createHash } from "node:crypto";
+// SHA-256 from @noble/hashes (FIPS 180-4), a pure-JS implementation: the same code runs in Node and
+// in the browser designer's worker, where node:crypto does not exist.
+import { sha256 } from "@noble/hashes/sha2.js";
+import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils.js";
 import { InputError } from "../errors.js";
 import type { ChecksumEntry } from "./types.js";
 
 /** Lowercase hex SHA-256 of a string (as UTF-8) or of raw bytes. */
 export function sha256Hex(content: string | Uint8Array): string {
-  return createHash("sha256").update(content).digest("hex");
+  return bytesToHex(sha256(typeof content === "string" ? utf8ToBytes(content) : content));
 }
 
 /** The listing for `entries`; names must be non-empty, unique and free of line breaks. */

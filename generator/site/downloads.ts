@@ -1,9 +1,12 @@
 // The files a builder downloads for one design, as pure functions of its entry: the entry itself,
 // a shape file that `bentwire analyze` reads back, node coordinates (CSV), a DXF polyline for a jig,
 // 1:1 bending templates tiled over A4 and Letter, and a checksum list over all of them.
-import { serialize } from "../catalog/store.js";
+import { serialize } from "../catalog/hash.js";
 import { bendingTemplateSvgs, nodesCsv, planBendingTemplate, sha256Listing, wireDxf, type ExportShape, type PaperName } from "../export/index.js";
 import { isOk, type Entry, type OkEntry } from "./ok.js";
+
+/** UTF-8 size of a text (TextEncoder: the same in Node and the browser designer). */
+const utf8Bytes = (text: string): number => new TextEncoder().encode(text).length;
 
 export type DownloadGroup = "entry" | "shape" | "nodes" | "dxf" | "template-a4" | "template-letter" | "checksums";
 
@@ -159,7 +162,7 @@ export function downloadRows(files: readonly DownloadFile[]): DownloadRow[] {
       row = { group: f.group, label: GROUP_LABELS[f.group], files: [], bytes: 0, tiledPaper: null };
       rows.push(row);
     }
-    const bytes = Buffer.byteLength(f.content, "utf8");
+    const bytes = utf8Bytes(f.content);
     row.files.push({ name: f.name, linkText: f.sheet?.tiled ? f.sheet.label : f.name, bytes });
     row.bytes += bytes;
     if (f.sheet?.tiled) row.tiledPaper = f.sheet.paper;
@@ -189,7 +192,7 @@ export function sheetMaps(files: readonly DownloadFile[]): SheetMap[] {
     if (sheets.length === 0 || !sheets[0].sheet!.tiled) continue;
     const { rows, columns } = sheets[0].sheet!;
     const cells: SheetMap["cells"] = Array.from({ length: rows }, () => Array.from({ length: columns }, () => null));
-    for (const f of sheets) cells[f.sheet!.row][f.sheet!.column] = { name: f.name, label: f.sheet!.label, bytes: Buffer.byteLength(f.content, "utf8") };
+    for (const f of sheets) cells[f.sheet!.row][f.sheet!.column] = { name: f.name, label: f.sheet!.label, bytes: utf8Bytes(f.content) };
     maps.push({ paper, paperLabel: label, rows, columns, cells });
   }
   return maps;

@@ -1,0 +1,117 @@
+// One design as the browser designer's worker runs it, start to end, with the same modules the
+// command line and the catalog use: designBentArm (search + polish), designResult (the fields of
+// `design --json`), analyzeDesign (sweep, feed match, tolerance, pattern), buildEntry (an entry like
+// a catalog one), the catalog's renderers and download writers. No DOM, no Node: the caller passes
+// `post`, which the worker wires to postMessage.
+import { analyzeDesign, DEFAULT_TOLERANCE } from "../analysis/index.js";
+import { buildEntry } from "../catalog/entryBuild.js";
+import type { CellRequest, Grid } from "../catalog/grid.js";
+import { canonicalJson, roundSignificant, sha256 } from "../catalog/hash.js";
+import { designBentArm } from "../design/designBentArm.js";
+import { designResult, type DesignResult } from "../design/designResult.js";
+import { shapeOf } from "../design/objective.js";
+import { bandOf, type DesignRequest } from "../design/request.js";
+import { patternCutSvg } from "../render/patternCutSvg.js";
+import { pattern3dSvg } from "../render/pattern3dSvg.js";
+import { shapeSvg } from "../render/shapeSvg.js";
+import { smithSvg } from "../render/smithSvg.js";
+import { sweepSvg } from "../render/sweepSvg.js";
+import { downloadFiles, downloadRows, type DownloadFile, type DownloadRow } from "../site/downloads.js";
+import { isOk, type Entry } from "../site/ok.js";
+import { checkRows, keyFigures, matchRows, pieceRows, toleranceRows, vertexRows } from "../site/tables.js";
+import { unpack, wirePointsM } from "../shapes/bentArm.js";
+import { wavelengthM } from "../units.js";
+
+export type JobMessage =
+  | { type: "progress"; evaluations: number; budget: number; bestGainDbi: number | null; pointsM: number[][] | null }
+  | { type: "analysing"; evaluations: number }
+  | { type: "done"; result: DesignResult; entry: Entry; figures: Figures | null; tables: Tables | null; files: DownloadFile[]; rows: DownloadRow[] }
+  | { type: "error"; message: string; input: boolean };
+
+export interface Figures { shape: string; phi: string; theta: string; sweep: string; smith: string; pattern3d: string }
+export interface Tables {
+  keyFigures: ReturnType<typeof keyFigures>;
+  pieces: ReturnType<typeof pieceRows>;
+  vertices: ReturnType<typeof vertexRows>;
+  match: ReturnType<typeof matchRows>;
+  tolerance: ReturnType<typeof toleranceRows>;
+  checks: ReturnType<typeof checkRows>;
+}
+
+/** Evaluations the search may spend plus the polish (the same budget the CLI's progress bar shows). */
+export const evaluationBudget = (r: DesignRequest): number => {
+  const n = 2 * r.piecesPerArm - 1;
+  return (r.maxEvaluations ?? 500 * n + 500) + 60 * n;
+};
+
+/** A file-name-safe id for a custom design: custom-<MHz>mhz-<L>wl-k<K>-<variant>. */
+export function customId(r: DesignRequest): string {
+  const mhz = roundSignificant(r.frequencyHz / 1e6, 7);
+  return `custom-${mhz}mhz-${roundSignificant(r.lengthWl, 6)}wl-k${r.piecesPerArm}-${r.variant}`;
+}
+
+/** The catalog cell a custom design stands in (a band of its own, named by its edges). */
+function cellOf(r: DesignRequest, band: [number, number]): CellRequest {
+  const conductor = typeof r.conductor === "string" ? r.conductor : "copper";
+  const [lo, hi] = band.map((v) => roundSignificant(v / 1e6, 7));
+  return {
+    id: customId(r),
+    band: { id: "custom", name: `Custom ${lo}–${hi} MHz`, lowMhz: lo, highMhz: hi, designMhz: r.frequencyHz / 1e6, wireDiameterMm: r.wireDiameterM * 1000, conductor, note: "Designed in the browser for the values in the form." },
+    lengthWl: r.lengthWl,
+    piecesPerArm: r.piecesPerArm,
+    variant: r.variant,
+  };
+}
+
+/** Wire points (m) of a parameter vector, for the live drawing. */
+export function pointsOf(x: number[], r: DesignRequest): number[][] {
+  return wirePointsM(unpack(x, r.piecesPerArm), { piecesPerArm: r.piecesPerArm, wireLengthM: r.lengthWl * wavelengthM(r.frequencyHz) });
+}
+
+export function runDesignJob(request: DesignRequest, post: (m: JobMessage) => void, opts: { progressEveryMs?: number; now?: () => number } = {}): void {
+  const budget = evaluationBudget(request);
+  const now = opts.now ?? (() => Date.now());
+  const every = opts.progressEveryMs ?? 100;
+  let last = -Infinity;
+  let lastBest: number | null = null;
+  const outcome = designBentArm(request, {
+    onProgress: (p) => {
+      // a new best is always shown; otherwise a few updates a second are enough
+      if (p.bestGainDbi === lastBest && now() - last < every) return;
+      last = now();
+      lastBest = p.bestGainDbi;
+      post({ type: "progress", evaluations: p.evaluations, budget, bestGainDbi: p.bestGainDbi, pointsM: p.bestX ? pointsOf(p.bestX, request) : null });
+    },
+  });
+  post({ type: "analysing", evaluations: outcome.evaluations });
+  const result = designResult(request, outcome);
+  const band = bandOf(request);
+  const tolerance = { samples: DEFAULT_TOLERANCE.samples, bendSigmaDeg: DEFAULT_TOLERANCE.bendSigmaDeg, lengthSigmaFraction: DEFAULT_TOLERANCE.lengthSigmaFraction, seed: request.seed };
+  const analysis = outcome.status === "ok"
+    ? analyzeDesign(shapeOf(outcome.x, request), { bandHz: band, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
+    : null;
+  const entry = buildEntry({
+    grid: {} as Grid, // buildEntry reads nothing from the grid; a custom design has none
+    cell: cellOf(request, band),
+    request: { ...request, bandHz: band },
+    outcome,
+    startedFrom: "search",
+    analysis,
+    inputHash: sha256(canonicalJson(request)),
+    tolerance,
+  });
+  const ok = isOk(entry) ? entry : null;
+  const figures: Figures | null = ok && {
+    shape: shapeSvg(ok, { widthPx: 800, dimensions: true }), // as the catalog page (site/figures.ts SHAPE_WIDTH_PX)
+    phi: patternCutSvg(ok, "phi"),
+    theta: patternCutSvg(ok, "theta"),
+    sweep: sweepSvg(ok),
+    smith: smithSvg(ok),
+    pattern3d: pattern3dSvg(ok),
+  };
+  const tables: Tables | null = ok && {
+    keyFigures: keyFigures(ok), pieces: pieceRows(ok), vertices: vertexRows(ok), match: matchRows(ok), tolerance: toleranceRows(ok), checks: checkRows(ok),
+  };
+  const files = downloadFiles(entry);
+  post({ type: "done", result, entry, figures, tables, files, rows: downloadRows(files) });
+}

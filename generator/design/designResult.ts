@@ -1,0 +1,62 @@
+// The result of one design as `design --json` prints it and the browser designer publishes it: the
+// outcome, the winning shape solved once more with the energy balance, its parameters in builder's
+// units, and the optimizer's record. One function, so both front ends give the same fields.
+import { solutionSummary } from "../analysis/solutionSummary.js";
+import { solveShape } from "../em/index.js";
+import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
+import { DEG_PER_RAD, SPEED_OF_LIGHT_M_PER_S } from "../units.js";
+import type { DesignOutcome } from "./designBentArm.js";
+import { shapeOf } from "./objective.js";
+import type { DesignRequest } from "./request.js";
+import { ELEVATION_WINDOWS_DEG } from "./groundObjective.js";
+
+/** The parameters in the units a builder reads. */
+export function parametersReport(x: number[], r: DesignRequest) {
+  const p = unpack(x, r.piecesPerArm);
+  const lengths = pieceLengthsM(p, { piecesPerArm: r.piecesPerArm, wireLengthM: (r.lengthWl * SPEED_OF_LIGHT_M_PER_S) / r.frequencyHz });
+  return {
+    vector: x,
+    firstAngleDeg: p.firstAngleRad * DEG_PER_RAD,
+    bendAnglesDeg: p.bendAnglesRad.map((b) => b * DEG_PER_RAD),
+    pieceLengthsM: lengths,
+  };
+}
+
+/** The shape file of the winning design, named after its request. */
+export function designShape(x: number[], r: DesignRequest) {
+  const mountedWords = r.ground ? `, ${r.mounting ?? "horizontal"} over ${r.ground.type} ground` : "";
+  return { ...shapeOf(x, r), name: `${r.lengthWl} λ wire, ${r.piecesPerArm} pieces per arm, ${r.variant}, ${r.frequencyHz / 1e6} MHz${mountedWords}` };
+}
+
+/** Over ground: the mounting, the objective's elevation window and gain in it, the feed height. */
+export function overGroundReport(request: DesignRequest, outcome: DesignOutcome, shape: ReturnType<typeof designShape>) {
+  if (!request.ground) return undefined;
+  const objective = request.objective ?? "peak";
+  return {
+    mounting: request.mounting ?? "horizontal",
+    objective,
+    elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective],
+    objectiveGainDbi: outcome.evaluation.gainDbi,
+    feedHeightM: shape.wires[shape.feed.wire].pointsM[shape.feed.vertex][2],
+  };
+}
+
+export function designResult(request: DesignRequest, outcome: DesignOutcome) {
+  const shape = designShape(outcome.x, request);
+  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  return {
+    status: outcome.status,
+    message: outcome.message,
+    variant: request.variant,
+    ...summary,
+    maxSwrInBand: outcome.evaluation.maxSwr,
+    parameters: parametersReport(outcome.x, request),
+    evaluations: outcome.evaluations,
+    seed: request.seed,
+    stopReasons: outcome.stopReasons,
+    ...overGroundReport(request, outcome, shape),
+    shape,
+  };
+}
+
+export type DesignResult = ReturnType<typeof designResult>;
