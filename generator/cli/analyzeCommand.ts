@@ -1,9 +1,12 @@
 // `analyze <shape.json>`: solves one shape and reports its figures, readable or as one JSON object.
 import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
 import { parseShape, solveShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { checkProblemSize } from "../em/shapeFile.js";
+import { SHAPE_BOUNDS } from "../bounds.js";
+import { InputError } from "../errors.js";
 import { analysisText } from "./analysisText.js";
 import { DEG_PER_RAD } from "../units.js";
-import { readInputFile } from "./errors.js";
+import { printable, readInputFile } from "./errors.js";
 import { complexText, fixed } from "./format.js";
 
 export interface AnalyzeOptions {
@@ -13,6 +16,21 @@ export interface AnalyzeOptions {
   lineOhm: number;
   toleranceSamples: number;
   seed: number;
+  /** Flags typed on the command line (not defaults): those that need --band-mhz are refused without it. */
+  given?: string[];
+}
+
+const NEEDS_BAND: Record<string, string> = { lineOhm: "--line-ohm", toleranceSamples: "--tolerance-samples", seed: "--seed" };
+
+/** Refuses a report whose figures are not finite: the input lies outside what the solver handles. */
+export function checkFinite(label: string, s: SolutionSummary): void {
+  const figures: [string, number][] = [
+    ["input impedance", s.inputImpedanceOhm.re], ["input impedance", s.inputImpedanceOhm.im], ["peak gain", s.peakGainDbi],
+    ["peak directivity", s.peakDirectivityDbi], ["efficiency", s.radiationEfficiency],
+  ];
+  for (const [what, v] of figures) {
+    if (!Number.isFinite(v)) throw new InputError(`${label}: the solve gives a non-finite ${what}; the shape lies outside what the solver handles (see the input bounds in README.md)`);
+  }
 }
 
 /** The figures every analysis reports (the JSON contract of `analyze --json`). */
@@ -39,7 +57,7 @@ export type SolutionSummary = ReturnType<typeof solutionSummary>;
 
 export function summaryText(label: string, s: SolutionSummary): string {
   const lines = [
-    `${label}`,
+    printable(label), // a name from a file may hold terminal escape sequences
     `  frequency            ${fixed(s.frequencyHz / 1e6, 4)} MHz`,
     `  unknowns / segments  ${s.unknowns} / ${s.segments}`,
     `  input impedance      ${complexText(s.inputImpedanceOhm, 2)}`,
@@ -54,12 +72,17 @@ export function summaryText(label: string, s: SolutionSummary): string {
 }
 
 export async function loadShape(path: string): Promise<Shape> {
-  return parseShape(await readInputFile(path, "analyze"), path);
+  return parseShape(await readInputFile(path, "analyze", SHAPE_BOUNDS.fileBytesMax), path);
 }
 
 export async function analyzeCommand(path: string, options: AnalyzeOptions): Promise<void> {
+  if (!options.bandMhz) {
+    const stray = (options.given ?? []).map((k) => NEEDS_BAND[k]).filter(Boolean);
+    if (stray.length) throw new InputError(`analyze: ${stray.join(", ")} ${stray.length > 1 ? "apply" : "applies"} only with --band-mhz LO:HI (the band sweep, feed match and tolerance study)`);
+  }
   const loaded = await loadShape(path);
   const shape = options.segmentsPerWavelength ? { ...loaded, segmentsPerWavelength: options.segmentsPerWavelength } : loaded;
+  if (options.segmentsPerWavelength) checkProblemSize(shape, options.segmentsPerWavelength, path);
   const analysisOptions = options.bandMhz && {
     bandHz: options.bandMhz,
     lineImpedanceOhm: options.lineOhm,
@@ -67,6 +90,7 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
   };
   if (analysisOptions) checkAnalysisOptions(shape.frequencyHz, analysisOptions);
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  checkFinite(path, summary);
   const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;
   if (options.json) {
     const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks };

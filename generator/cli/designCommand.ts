@@ -11,6 +11,9 @@ import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
 import { DEG_PER_RAD } from "../units.js";
 import { solutionSummary, summaryText } from "./analyzeCommand.js";
 import { fixed, table } from "./format.js";
+import { checkOutputFile } from "./targets.js";
+import { SHAPE_BOUNDS } from "../bounds.js";
+import { wavelengthM } from "../units.js";
 
 export interface DesignFlags {
   freqMhz?: number;
@@ -23,12 +26,25 @@ export interface DesignFlags {
   seed: number;
   json?: boolean;
   out?: string;
+  /** Write --out even when no shape met the limits. */
+  keepInfeasible?: boolean;
 }
+
+/** Exit status of a design whose search found no shape meeting every limit (README.md says so). */
+export const INFEASIBLE_EXIT = 3;
+
+/** The solver's advice names a shape-file option; design's own flags are the wire and its length. */
+const forDesign = (message: string): string =>
+  message.replace(/lengthen the piece or use fewer segments per wavelength/g, "use a thinner wire (--wire-diameter-mm) or a longer one (--length-wl)");
 
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
   if (flags.freqMhz === undefined) throw new InputError("design: --freq-mhz is required");
   if (flags.lengthWl === undefined) throw new InputError("design: --length-wl is required");
   if (flags.pieces === undefined) throw new InputError("design: --pieces is required");
+  const lambdaM = wavelengthM(flags.freqMhz * 1e6);
+  if (flags.wireDiameterMm / 2000 > SHAPE_BOUNDS.radiusMaxWl * lambdaM) {
+    throw new InputError(`design: --wire-diameter-mm ${flags.wireDiameterMm} is too thick for ${flags.freqMhz} MHz; the thin-wire model needs at most ${Number((2000 * SHAPE_BOUNDS.radiusMaxWl * lambdaM).toPrecision(3))} mm (${2 * SHAPE_BOUNDS.radiusMaxWl} wavelengths)`);
+  }
   const request = parseDesignRequest(
     {
       frequencyHz: flags.freqMhz * 1e6,
@@ -59,6 +75,7 @@ export function parametersReport(x: number[], r: DesignRequest) {
 
 export async function designCommand(flags: DesignFlags): Promise<void> {
   const request = requestFromFlags(flags);
+  if (flags.out !== undefined) await checkOutputFile("--out", flags.out); // before the search, not after it
   const bar = process.stderr.isTTY && !flags.json ? new SingleBar({ format: "designing [{bar}] {value}/{total} evaluations, best {best} dBi", stream: process.stderr, hideCursor: true }) : null;
   const budget = request.maxEvaluations ?? 500 * (2 * request.piecesPerArm - 1) + 500;
   bar?.start(budget + 60 * (2 * request.piecesPerArm - 1), 0, { best: "–" });
@@ -66,12 +83,26 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
   const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  const feasible = outcome.status === "ok";
+  if (!feasible) process.exitCode = INFEASIBLE_EXIT;
+  const message = forDesign(outcome.message);
+  let solution;
+  try {
+    solution = solveShape(shape, { energyBalance: true });
+  } catch (err) {
+    // an infeasible best shape may be one the solver refuses (wires touching): report the search alone
+    if (feasible || !(err instanceof InputError)) throw err;
+    if (flags.json) process.stdout.write(`${JSON.stringify({ status: outcome.status, message, evaluations: outcome.evaluations, seed: request.seed, stopReasons: outcome.stopReasons })}\n`);
+    else process.stdout.write(`status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}\n${flags.out ? "no shape file written: the best shape found cannot be solved\n" : ""}`);
+    return;
+  }
+  const summary = solutionSummary(solution);
   const parameters = parametersReport(outcome.x, request);
-  if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
+  const written = flags.out !== undefined && (feasible || flags.keepInfeasible === true);
+  if (written) await writeFileAtomic(flags.out!, `${JSON.stringify(shape, null, 2)}\n`);
   const result = {
     status: outcome.status,
-    message: outcome.message,
+    message,
     variant: request.variant,
     ...summary,
     maxSwrInBand: outcome.evaluation.maxSwr,
@@ -91,13 +122,14 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     rows.push([String(i + 1), fixed(len, 4), turn]);
   });
   const lines = [
-    `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
+    `status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
     summaryText(shape.name, summary),
     "",
     "right arm, from the feed outward (the left arm is its mirror image):",
     table(rows),
   ];
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
-  if (flags.out) lines.push(`shape written to ${flags.out}`);
+  if (written) lines.push(`shape written to ${flags.out}`);
+  else if (flags.out !== undefined) lines.push(`no shape file written: no shape met every limit (add --keep-infeasible to write it anyway)`);
   process.stdout.write(`${lines.join("\n")}\n`);
 }
