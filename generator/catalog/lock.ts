@@ -3,7 +3,8 @@
 // a killed run (its pid no longer runs on this host) is taken over, so it can never stay stuck.
 import { hostname } from "node:os";
 import { join } from "node:path";
-import { mkdir, open, readFile, rm, stat } from "node:fs/promises";
+import { randomBytes } from "node:crypto";
+import { link, mkdir, readFile, rm, writeFile } from "node:fs/promises";
 import { InputError } from "../errors.js";
 import { processAlive } from "../fsAtomic.js";
 
@@ -16,7 +17,7 @@ async function holder(path: string): Promise<Holder | null> {
     const raw = JSON.parse(await readFile(path, "utf8")) as Partial<Holder>;
     return { pid: Number(raw.pid), host: String(raw.host), command: String(raw.command) };
   } catch {
-    return null; // unreadable or half-written (killed while writing it): nobody holds it
+    return null; // unreadable: not a lock any run of ours wrote (ours appear whole), so nobody holds it
   }
 }
 
@@ -26,21 +27,26 @@ export async function lockFolder(dir: string, command: string): Promise<() => Pr
   const path = join(dir, LOCK_FILE);
   const me: Holder = { pid: process.pid, host: hostname(), command };
   for (let attempt = 0; attempt < 3; attempt++) {
+    // write the holder to a temporary file, then hard-link it into place: the lock appears whole
+    // or not at all (link fails with EEXIST when another run holds it)
+    const tmp = join(dir, `${LOCK_FILE}.${process.pid}.${randomBytes(4).toString("hex")}.tmp`);
+    await writeFile(tmp, `${JSON.stringify(me)}\n`);
+    let linked = false;
     try {
-      const h = await open(path, "wx");
-      await h.writeFile(`${JSON.stringify(me)}\n`);
-      await h.close();
+      await link(tmp, path);
+      linked = true;
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== "EEXIST") throw err;
+    } finally {
+      await rm(tmp, { force: true });
+    }
+    if (linked) {
       return async () => {
         const now = await holder(path);
         if (now && now.pid === me.pid && now.host === me.host) await rm(path, { force: true });
       };
-    } catch (err) {
-      if ((err as NodeJS.ErrnoException).code !== "EEXIST") throw err;
     }
     const other = await holder(path);
-    if (!other && Date.now() - (await stat(path).then((s) => s.mtimeMs, () => 0)) < 5000) {
-      throw new InputError(`${dir}: another run is taking the lock ${path} right now; wait for it to finish`);
-    }
     if (other && other.host !== me.host) {
       throw new InputError(`${dir}: locked by ${other.command} (pid ${other.pid}) on ${other.host}; wait for it, or delete ${path} if no run is active there`);
     }

@@ -2,7 +2,7 @@
 // The bentwire command line: analyze a shape, design one, build and check the catalog.
 import { Command, CommanderError } from "commander";
 import { analyzeCommand } from "./analyzeCommand.js";
-import { runReportingErrors } from "./errors.js";
+import { printable, runReportingErrors } from "./errors.js";
 import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCommand } from "./catalogCommands.js";
 import { designCommand } from "./designCommand.js";
 import { bandMhz, nonEmpty, numberIn, oneOf, positiveNumber, wholeNumber } from "./options.js";
@@ -12,7 +12,7 @@ import { VARIANTS } from "../design/request.js";
 const program = new Command("bentwire")
   .description("Bent-wire antenna designs: solve, optimize, analyze and catalog")
   .exitOverride()
-  .configureOutput({ writeErr: (s) => process.stderr.write(s) });
+  .configureOutput({ writeErr: (s) => process.stderr.write(`${printable(s.replace(/\n$/, ""))}\n`) });
 
 program
   .command("analyze")
