@@ -6,7 +6,8 @@
 //  - the dense moment matrix costs 16 N² bytes and N³/3 operations: N = 1,200 unknowns is 23 MB and
 //    about 2 s of CPU; the far-field search grows with the distance of the wire from the origin in
 //    wavelengths, hence the 10 λ bound on it;
-//  - below a span of 1e-4 λ, or a radius below 1 µm, the thin-wire kernel loses every digit;
+//  - below a span of 1e-4 λ, or a radius below 1 nm, the thin-wire kernel loses every digit (reference
+//    checks use radii down to 1e-7 λ);
 //  - the surface-resistance loss model (skin depth ≪ radius) is meaningless for poor conductors,
 //    so conductivity is held to metals (stainless steel ≈ 1.4e6 S/m, silver ≈ 6.3e7 S/m).
 
@@ -14,7 +15,7 @@ export const SHAPE_BOUNDS = {
   /** Design frequency (Hz): 10 kHz … 300 GHz. */
   frequencyHz: { min: 1e4, max: 3e11 },
   /** Wire radius (m), also per wire. */
-  radiusM: { min: 1e-6, max: 1 },
+  radiusM: { min: 1e-9, max: 1 },
   /** Wire radius at most this many wavelengths (thin-wire model). */
   radiusMaxWl: 0.01,
   /** Each coordinate (m), absolute. */
@@ -65,7 +66,7 @@ export const GRID_BOUNDS = {
   swrLimit: { min: 1, max: 10 },
   referenceRadiusWl: { min: 1e-6, max: 0.01 },
   relativeBandwidth: { min: 0, max: 0.5 },
-  wireDiameterMm: { min: 0.002, max: 2000 },
+  wireDiameterMm: { min: 2e-6, max: 2000 },
 } as const;
 
 /** "1e4 and 3e11" style text for messages ("must lie between …"). */

@@ -3,7 +3,7 @@
 // (and README.md); a shape whose mesh would be too large is refused here, before any allocation.
 // To add a field, add it to shapeSchema below (optional fields keep old files valid).
 import { z } from "zod";
-import { rangeText, SHAPE_BOUNDS as B } from "../bounds.js";
+import { boundText, rangeText, SHAPE_BOUNDS as B } from "../bounds.js";
 import { InputError, shown } from "../errors.js";
 import { wavelengthM } from "../units.js";
 import { DEFAULT_SEGMENTS_PER_WAVELENGTH, MIN_SEGMENTS_PER_PIECE } from "./mesh.js";
@@ -133,7 +133,7 @@ export function validateShape(raw: unknown, label = "shape"): Shape {
   return shape;
 }
 
-const g3 = (v: number) => Number(v.toPrecision(3));
+const g3 = (v: number) => boundText(Number(v.toPrecision(3)));
 
 /**
  * Electrical size checks and the mesh size, counted the way em/mesh.ts cuts pieces
@@ -165,7 +165,7 @@ export function checkProblemSize(shape: Shape, segmentsPerWavelength?: number, l
   }
   const spanM = Math.max(hi[0] - lo[0], hi[1] - lo[1], hi[2] - lo[2]);
   if (spanM < B.spanMinWl * lambdaM) {
-    throw new InputError(`${label}: wires: the shape spans ${g3(spanM / lambdaM)} wavelengths; the solver needs at least ${B.spanMinWl} λ (${g3(B.spanMinWl * lambdaM)} m at this frequency)`);
+    throw new InputError(`${label}: wires: the shape spans ${g3(spanM / lambdaM)} wavelengths; the solver needs at least ${boundText(B.spanMinWl)} λ (${g3(B.spanMinWl * lambdaM)} m at this frequency)`);
   }
   const unknowns = segments - shape.wires.length;
   if (segments > B.segmentsMax || unknowns > B.unknownsMax) {

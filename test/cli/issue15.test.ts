@@ -6,7 +6,7 @@ import { cpSync, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, write
 import { hostname } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it, vi } from "vitest";
-import { SHAPE_BOUNDS } from "../../generator/bounds.js";
+import { ANALYSIS_BOUNDS as A, boundText, GRID_BOUNDS as G, SHAPE_BOUNDS } from "../../generator/bounds.js";
 import { parseGrid } from "../../generator/catalog/grid.js";
 import { LOCK_FILE } from "../../generator/catalog/lock.js";
 import { canonicalJson, sha256 } from "../../generator/catalog/hash.js";
@@ -42,7 +42,7 @@ const oneLineExit = (run: ReturnType<typeof cli>, status: number, message: RegEx
 
 describe("issue 15: crashes on small valid-looking files", () => {
   it("frequencyHz 1e300 is refused (exit 2), not an internal error", () => {
-    oneLineExit(cli("analyze", writeShape(tmp(), shapeWith({ frequencyHz: 1e300 }))), 2, /frequencyHz must lie between 1e4 and 3e11 Hz \(got 1e\+300\)/);
+    oneLineExit(cli("analyze", writeShape(tmp(), shapeWith({ frequencyHz: 1e300 }))), 2, /frequencyHz must lie between 10000 and 3e11 Hz \(got 1e\+300\)/);
   });
   it("a coordinate of 1e300 or 2^53 is refused", () => {
     expect(shapeRefusal(line([[[-1e300, 0, 0], [0, 0, 0], [0.5, 0, 0]]]))).toMatch(/pointsM\[0\]\[0\]: coordinate must lie between -10000 and 10000 m/);
@@ -71,7 +71,7 @@ describe("issue 15: a bound on the problem size", () => {
   it("a dipole moved to x = 1e6 m is refused", () => {
     expect(shapeRefusal(line([[[1e6 - 0.5, 0, 0], [1e6, 0, 0], [1e6 + 0.5, 0, 0]]]))).toMatch(/coordinate must lie between -10000 and 10000 m/);
     // inside the coordinate bound but far out in wavelengths: the extent bound
-    expect(shapeRefusal(line([[[99.5, 0, 0], [100, 0, 0], [100.5, 0, 0]]]))).toMatch(/48\.4 wavelengths from the origin; keep every point within 10 λ/);
+    expect(shapeRefusal(line([[[99.5, 0, 0], [100, 0, 0], [100.5, 0, 0]]]))).toMatch(/48\.6 wavelengths from the origin; keep every point within 10 λ/);
   });
   it("a 100 m wire at 145 MHz is refused with its size in wavelengths", () => {
     expect(shapeRefusal(line([[[-50, 0, 0], [0, 0, 0], [50, 0, 0]]]))).toMatch(/24\.2 wavelengths from the origin/);
@@ -94,7 +94,7 @@ describe("issue 15: a bound on the problem size", () => {
 
 describe("issue 15: no meaningless result accepted", () => {
   it("radius 1e-300, frequency 1 Hz and 1.91 Hz are refused (they gave NaN figures)", () => {
-    expect(shapeRefusal(shapeWith({ wireRadiusM: 1e-300 }))).toMatch(/wireRadiusM must lie between 1e-6 and 1 m/);
+    expect(shapeRefusal(shapeWith({ wireRadiusM: 1e-300 }))).toMatch(/wireRadiusM must lie between 1e-9 and 1 m/);
     expect(shapeRefusal(shapeWith({ frequencyHz: 1 }))).toMatch(/frequencyHz must lie between/);
     expect(shapeRefusal(shapeWith({ frequencyHz: 1.91 }))).toMatch(/frequencyHz must lie between/);
   });
@@ -102,7 +102,7 @@ describe("issue 15: no meaningless result accepted", () => {
     expect(shapeRefusal(shapeWith({ conductor: { conductivitySPerM: 1e-300 } }))).toMatch(/conductivitySPerM must lie between 1e5 and 1e8 S\/m/);
   });
   it("a shape electrically too small to solve is refused", () => {
-    expect(shapeRefusal(shapeWith({ frequencyHz: 1e4, wires: [{ pointsM: [[-0.1, 0, 0], [0, 0, 0], [0.1, 0, 0]] }] }))).toMatch(/spans 6\.67e-6 wavelengths; the solver needs at least 0\.0001 λ/);
+    expect(shapeRefusal(shapeWith({ frequencyHz: 1e4, wires: [{ pointsM: [[-0.1, 0, 0], [0, 0, 0], [0.1, 0, 0]] }] }))).toMatch(/spans 6\.67e-6 wavelengths; the solver needs at least 1e-4 λ/);
   });
 });
 
@@ -258,8 +258,33 @@ describe("issue 15: smaller points", () => {
     expect(shapeRefusal(JSON.stringify(noFeed))).toBe('shape.json: feed: feed is required: {"wire": W, "vertex": V} names the wire (0 = first) and the interior vertex where the source sits');
   });
   it("the bounds module and README state the same bounds", () => {
-    const readme = readFileSync("README.md", "utf8");
-    expect(readme).toContain(`at most ${SHAPE_BOUNDS.unknownsMax} (refused before any allocation`);
-    expect(readme).toContain(`at most ${SHAPE_BOUNDS.segmentsMax} |`);
+    const rows = new Map(readFileSync("README.md", "utf8").split("\n").filter((l) => l.startsWith("| ")).map((l) => [l.split("|")[1].trim(), l] as const));
+    const S = SHAPE_BOUNDS, t = boundText;
+    const expected: [string, string[]][] = [
+      ["frequency", [`${t(S.frequencyHz.min)} to ${t(S.frequencyHz.max)} Hz`]],
+      ["wire radius", [`${t(S.radiusM.min)} to ${t(S.radiusM.max)} m`, `at most ${S.radiusMaxWl} wavelengths`]],
+      ["wire diameter", [`${t(G.wireDiameterMm.min)} to ${t(G.wireDiameterMm.max)} mm`, `at most ${2 * S.radiusMaxWl} wavelengths`]],
+      ["coordinates", [`±${S.coordinateAbsM} m`]],
+      ["extent in wavelengths", [`within ${S.farthestPointMaxWl} λ`, `at least ${t(S.spanMinWl)} λ`]],
+      ["segments", [`at most ${S.segmentsMax}`]],
+      ["unknowns", [`at most ${S.unknownsMax}`]],
+      ["vertices", [`at most ${S.verticesMax}`]],
+      ["wires", [`at most ${S.wiresMax}`]],
+      ["conductivity", [`${t(S.conductivitySPerM.min)} to ${t(S.conductivitySPerM.max)} S/m`]],
+      ["segments per wavelength", [`${S.segmentsPerWavelength.min} to ${S.segmentsPerWavelength.max}`, `grid: ${G.segmentsPerWavelength.min} to ${G.segmentsPerWavelength.max}`]],
+      ["line impedance", [`${A.lineImpedanceOhm.min} to ${A.lineImpedanceOhm.max} Ω`]],
+      ["tolerance samples", [`${A.toleranceSamples.min} to ${A.toleranceSamples.max}`]],
+      ["tolerance sigmas", [`${A.bendSigmaDeg.min} to ${A.bendSigmaDeg.max}`]],
+      ["band edges", [`at most ${A.bandRatioMax} × the low edge`]],
+      ["wire lengths", [`${G.lengthWl.min} to ${G.lengthWl.max} wavelengths`, `at most ${G.lengthsMax} lengths and ${G.bandsMax} bands`]],
+      ["seeds", [`${A.seed.min} to ${A.seed.max}`]],
+      ["file size", [`${S.fileBytesMax} / ${G.fileBytesMax} bytes`]],
+      ["nesting", [`${S.nestingMax} levels`, `up to ${G.indentMax} columns`, `at most ${G.keysMax} keys`]],
+    ];
+    for (const [row, texts] of expected) {
+      expect(rows.has(row), row).toBe(true);
+      for (const text of texts) expect(rows.get(row), row).toContain(text);
+    }
+    expect(A.lengthSigmaPercent.max).toBe(A.bendSigmaDeg.max); // the README states one range for both
   });
 });
