@@ -3,8 +3,8 @@
 // README.md). Expansion is deterministic: requests come out sorted by id.
 import { parseDocument } from "yaml";
 import { z } from "zod";
-import { ANALYSIS_BOUNDS as A, GRID_BOUNDS as G, rangeText, SHAPE_BOUNDS as S } from "../bounds.js";
-import { boundedNumber, fieldPath, zodMessage } from "../em/shapeFile.js";
+import { ANALYSIS_BOUNDS as A, GRID_BOUNDS as G, SHAPE_BOUNDS as S } from "../bounds.js";
+import { boundedNumber, zodMessage } from "../em/shapeFile.js";
 import { InputError } from "../errors.js";
 import { checkTextLimits } from "../textLimits.js";
 import { wavelengthM } from "../units.js";

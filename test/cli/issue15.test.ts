@@ -2,7 +2,7 @@
 // bound on the problem size, meaningless results, wrong targets that succeeded, results lost,
 // leftovers of killed runs, and the smaller points. Validation cases run in-process; the command
 // line is spawned where the exit status or the printed text is the point.
-import { cpSync, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { cpSync, existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { hostname } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it, vi } from "vitest";
