@@ -2,6 +2,7 @@
 import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
 import { parseShape, solveShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
 import { checkProblemSize } from "../em/shapeFile.js";
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH } from "../em/mesh.js";
 import { SHAPE_BOUNDS } from "../bounds.js";
 import { InputError } from "../errors.js";
 import { analysisText } from "./analysisText.js";
@@ -88,7 +89,15 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
     lineImpedanceOhm: options.lineOhm,
     tolerance: { ...DEFAULT_TOLERANCE, samples: options.toleranceSamples, seed: options.seed },
   };
-  if (analysisOptions) checkAnalysisOptions(shape.frequencyHz, analysisOptions);
+  if (analysisOptions) {
+    checkAnalysisOptions(shape.frequencyHz, analysisOptions);
+    // every solve of the analysis stays within the bounds: the sweep keeps the mesh and moves the
+    // frequency up to the band's high edge; the convergence check doubles the segments
+    const spw = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
+    const highHz = analysisOptions.bandHz[1];
+    checkProblemSize({ ...shape, frequencyHz: highHz }, (spw * shape.frequencyHz) / highHz, `${path} (at the band's high edge)`);
+    checkProblemSize(shape, 2 * spw, `${path} (the convergence check at twice the segments per wavelength)`);
+  }
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   checkFinite(path, summary);
   const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;

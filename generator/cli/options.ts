@@ -2,7 +2,7 @@
 // Only plain decimal numbers are read ("", " ", "0x10", "1_000", "Infinity" are refused), and every
 // number has the range of ../bounds.ts.
 import { InvalidArgumentError } from "commander";
-import { rangeText, SHAPE_BOUNDS } from "../bounds.js";
+import { ANALYSIS_BOUNDS, rangeText, SHAPE_BOUNDS } from "../bounds.js";
 
 const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const WHOLE = /^\d+$/;
@@ -47,6 +47,9 @@ export function bandMhz(flag: string) {
     }
     if (!parts.every((v) => v >= MHZ.min && v <= MHZ.max)) throw new InvalidArgumentError(`${flag} edges must lie between ${rangeText(MHZ)} MHz`);
     if (!(parts[0] < parts[1])) throw new InvalidArgumentError(`${flag} must have LO below HI`);
+    // every sweep point is a solve: a band spanning decades would mesh the wire at a frequency
+    // where it is thousands of wavelengths long
+    if (parts[1] > ANALYSIS_BOUNDS.bandRatioMax * parts[0]) throw new InvalidArgumentError(`${flag} HI may be at most ${ANALYSIS_BOUNDS.bandRatioMax} × LO (got ${quoted(text)})`);
     return [parts[0] * 1e6, parts[1] * 1e6];
   };
 }

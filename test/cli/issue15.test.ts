@@ -87,6 +87,9 @@ describe("issue 15: a bound on the problem size", () => {
     const file = writeShape(tmp(), shapeWith({ wires: [{ pointsM: [[-half, 0, 0], [0, 0, 0], [half, 0, 0]] }] }));
     oneLineExit(cli("analyze", file, "--segments-per-wavelength", "400"), 2, /would need 3599 unknowns/);
   });
+  it("a band spanning decades is refused before the sweep meshes the wire at its high edge", () => {
+    oneLineExit(cli("analyze", writeShape(tmp(), JSON.stringify(dipole)), "--band-mhz", "0.01:300000"), 2, /--band-mhz HI may be at most 2 × LO/);
+  });
   it("grid tolerance.samples 1000000000 is refused", () => {
     expect(gridRefusal(GRID.replace("samples: 8", "samples: 1000000000"))).toMatch(/tolerance\.samples: samples must lie between 1 and 1000/);
   });
