@@ -2,7 +2,9 @@
 // computes the rest on a worker pool (piscina): first the wavelength-unit reference searches the
 // missing entries need, then the entries themselves, each as soon as its reference is ready. Every
 // result is written atomically as it arrives.
+import { rm } from "node:fs/promises";
 import { cpus } from "node:os";
+import { join } from "node:path";
 import { Piscina } from "piscina";
 import { InputError } from "../errors.js";
 import { entryInputHash, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
@@ -10,6 +12,8 @@ import type { Entry } from "./entrySchema.js";
 import { expandGrid, shardOf, type CellRequest, type Grid } from "./grid.js";
 import { readEntry, readReference, referenceDir, writeEntry, writeReference } from "./store.js";
 import { createScheduler } from "./scheduler.js";
+import { lockFolder } from "./lock.js";
+import { strayTempFiles } from "../fsAtomic.js";
 import type { Task } from "./worker.js";
 
 export interface GenerateOptions {
@@ -22,6 +26,8 @@ export interface GenerateOptions {
 }
 
 export interface GenerateReport {
+  /** Temporary files of killed runs that this run removed. */
+  removedTemporary: string[];
   selected: number;
   upToDate: number;
   computed: number;
@@ -58,10 +64,34 @@ export async function selectWork(o: GenerateOptions): Promise<{ cells: CellReque
 
 const keyOf = (c: CellRequest): ReferenceKey => ({ lengthWl: c.lengthWl, piecesPerArm: c.piecesPerArm, variant: c.variant });
 
+/** Removes the temporary files killed runs left (only writeFileAtomic's pattern, only dead pids). */
+async function removeStrayTemporaries(dirs: string[]): Promise<string[]> {
+  const removed: string[] = [];
+  for (const dir of dirs) {
+    for (const name of await strayTempFiles(dir)) {
+      await rm(join(dir, name), { force: true });
+      removed.push(join(dir, name));
+    }
+  }
+  return removed;
+}
+
 export async function generate(o: GenerateOptions): Promise<GenerateReport> {
+  if (o.outDir.trim() === "") throw new InputError("generate: the output folder name is empty");
+  if (o.only) onlyMatcher(o.only); // a bad pattern is refused before the folder is touched
+  const release = await lockFolder(o.outDir, "generate");
+  try {
+    return await generateLocked(o);
+  } finally {
+    await release();
+  }
+}
+
+async function generateLocked(o: GenerateOptions): Promise<GenerateReport> {
   const t0 = performance.now();
-  const { cells, todo, recomputed } = await selectWork(o);
   const refDir = referenceDir(o.outDir);
+  const removedTemporary = await removeStrayTemporaries([o.outDir, refDir]);
+  const { cells, todo, recomputed } = await selectWork(o);
   // every reference the missing entries need, and the chain of shorter ones each starts from
   const keys = new Map<string, ReferenceKey>();
   for (const c of todo) {
@@ -78,7 +108,7 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
   let done = 0;
   let infeasible = 0;
   const tick = (label: string) => o.onProgress?.({ done: ++done, total, label });
-  if (total === 0) return { selected: cells.length, upToDate: cells.length, computed: 0, recomputed, referencesComputed: 0, infeasible: 0, seconds: (performance.now() - t0) / 1000 };
+  if (total === 0) return { removedTemporary, selected: cells.length, upToDate: cells.length, computed: 0, recomputed, referencesComputed: 0, infeasible: 0, seconds: (performance.now() - t0) / 1000 };
 
   const workers = Math.max(1, Math.min(o.workers, cpus().length * 4));
   const execArgv = process.execArgv.some((a) => a.includes("tsx")) ? process.execArgv : [...process.execArgv, "--import", "tsx"];
@@ -111,6 +141,7 @@ export async function generate(o: GenerateOptions): Promise<GenerateReport> {
     await pool.destroy();
   }
   return {
+    removedTemporary,
     selected: cells.length,
     upToDate: cells.length - todo.length,
     computed: todo.length,

@@ -1,45 +1,52 @@
 // The grid file (YAML): bands × wire lengths × pieces per arm × variants. Validated with zod; every
-// problem is one line naming the file, the place and the rule. Expansion is deterministic: requests
-// come out sorted by id.
-import { parse as parseYaml, YAMLParseError } from "yaml";
+// problem is one line naming the file, the place and the rule. The bounds are in ../bounds.ts (and
+// README.md). Expansion is deterministic: requests come out sorted by id.
+import { parseDocument } from "yaml";
 import { z } from "zod";
-import { fieldPath } from "../em/shapeFile.js";
+import { ANALYSIS_BOUNDS as A, GRID_BOUNDS as G, SHAPE_BOUNDS as S } from "../bounds.js";
+import { boundedNumber, zodMessage } from "../em/shapeFile.js";
 import { InputError } from "../errors.js";
+import { checkTextLimits } from "../textLimits.js";
+import { wavelengthM } from "../units.js";
 import { VARIANTS, type Variant } from "../design/request.js";
 
-const positive = (what: string) => z.number({ error: `${what} must be a number` }).refine((v) => Number.isFinite(v) && v > 0, `${what} must be a positive number`);
+const MHZ = { min: S.frequencyHz.min / 1e6, max: S.frequencyHz.max / 1e6 };
+const mhz = (what: string) => boundedNumber(what, MHZ, " MHz");
+const whole = (what: string, r: { min: number; max: number }) => boundedNumber(what, r).refine(Number.isInteger, `${what} must be a whole number`);
+const text = (what: string) => z.string({ error: `${what} must be a string` });
 
 const bandSchema = z.strictObject({
-  id: z.string({ error: "id must be a string" }).regex(/^[a-z0-9][a-z0-9.]*$/, "id must be lower-case letters, digits and dots"),
-  name: z.string({ error: "name must be a string" }).min(1),
-  lowMhz: positive("lowMhz"),
-  highMhz: positive("highMhz"),
-  designMhz: positive("designMhz"),
-  wireDiameterMm: positive("wireDiameterMm"),
+  id: text("id").regex(/^[a-z0-9][a-z0-9.]*$/, "id must be lower-case letters, digits and dots").max(40, "id must be at most 40 characters"),
+  name: text("name").min(1, "name must not be empty").max(200, "name must be at most 200 characters"),
+  lowMhz: mhz("lowMhz"),
+  highMhz: mhz("highMhz"),
+  designMhz: mhz("designMhz"),
+  wireDiameterMm: boundedNumber("wireDiameterMm", G.wireDiameterMm, " mm"),
   conductor: z.enum(["perfect", "copper", "aluminium"], { error: "conductor must be perfect, copper or aluminium" }),
-  note: z.string({ error: "note must be a string" }),
+  note: text("note").max(2000, "note must be at most 2000 characters"),
 });
 
 export const gridSchema = z
   .strictObject({
     version: z.literal(1, { error: "version must be 1" }),
-    seed: z.number().int("seed must be a whole number").nonnegative("seed must be 0 or more"),
-    lineImpedanceOhm: positive("lineImpedanceOhm"),
-    swrLimit: positive("swrLimit").refine((v) => v > 1, "swrLimit must exceed 1"),
-    segmentsPerWavelength: positive("segmentsPerWavelength").refine((v) => v >= 10 && v <= 200, "segmentsPerWavelength must lie between 10 and 200"),
+    seed: whole("seed", A.seed),
+    lineImpedanceOhm: boundedNumber("lineImpedanceOhm", A.lineImpedanceOhm, " Ω"),
+    swrLimit: boundedNumber("swrLimit", G.swrLimit).refine((v) => v > 1, "swrLimit must exceed 1"),
+    segmentsPerWavelength: boundedNumber("segmentsPerWavelength", G.segmentsPerWavelength),
     tolerance: z.strictObject({
-      samples: z.number().int("samples must be a whole number").positive("samples must be above 0"),
-      bendSigmaDeg: z.number().nonnegative("bendSigmaDeg must be 0 or more"),
-      lengthSigmaPercent: z.number().nonnegative("lengthSigmaPercent must be 0 or more"),
-    }),
+      samples: whole("samples", A.toleranceSamples),
+      bendSigmaDeg: boundedNumber("bendSigmaDeg", A.bendSigmaDeg, "°"),
+      lengthSigmaPercent: boundedNumber("lengthSigmaPercent", A.lengthSigmaPercent, " %"),
+    }, { error: "tolerance is required: {samples, bendSigmaDeg, lengthSigmaPercent}" }),
     reference: z.strictObject({
-      radiusWl: positive("radiusWl"),
-      relativeBandwidth: positive("relativeBandwidth").refine((v) => v < 0.5, "relativeBandwidth must be below 0.5"),
-    }),
-    lengthsWl: z.array(positive("a wire length").refine((v) => v >= 0.2 && v <= 6, "wire lengths must lie between 0.2 and 6 wavelengths")).min(1, "lengthsWl needs at least one length"),
-    piecesPerArm: z.array(z.number().int("pieces per arm must be whole numbers").min(1, "pieces per arm start at 1").max(8, "pieces per arm stop at 8")).min(1),
-    variants: z.array(z.enum(VARIANTS, { error: `variants must be ${VARIANTS.join(" or ")}` })).min(1),
-    bands: z.array(bandSchema).min(1, "bands needs at least one band"),
+      radiusWl: boundedNumber("radiusWl", G.referenceRadiusWl, " λ"),
+      relativeBandwidth: boundedNumber("relativeBandwidth", G.relativeBandwidth).refine((v) => v > 0 && v < G.relativeBandwidth.max, `relativeBandwidth must lie above 0 and below ${G.relativeBandwidth.max}`),
+    }, { error: "reference is required: {radiusWl, relativeBandwidth}" }),
+    lengthsWl: z.array(boundedNumber("a wire length", G.lengthWl, " wavelengths"), { error: "lengthsWl must be a list of wire lengths" })
+      .min(1, "lengthsWl needs at least one length").max(G.lengthsMax, `lengthsWl holds at most ${G.lengthsMax} lengths`),
+    piecesPerArm: z.array(whole("pieces per arm", G.piecesPerArm), { error: "piecesPerArm must be a list of whole numbers" }).min(1, "piecesPerArm needs at least one value"),
+    variants: z.array(z.enum(VARIANTS, { error: `variants must be ${VARIANTS.join(" or ")}` }), { error: "variants must be a list" }).min(1, "variants needs at least one"),
+    bands: z.array(bandSchema, { error: "bands must be a list of bands" }).min(1, "bands needs at least one band").max(G.bandsMax, `bands holds at most ${G.bandsMax} bands`),
   })
   .superRefine((g, ctx) => {
     const seen = new Set<string>();
@@ -48,8 +55,12 @@ export const gridSchema = z
       seen.add(b.id);
       if (!(b.lowMhz < b.highMhz)) {
         ctx.addIssue({ code: "custom", path: ["bands", i, "lowMhz"], message: `lowMhz must be below highMhz (got ${b.lowMhz} ≥ ${b.highMhz})` });
+      } else if (b.highMhz > A.bandRatioMax * b.lowMhz) {
+        ctx.addIssue({ code: "custom", path: ["bands", i, "highMhz"], message: `highMhz may be at most ${A.bandRatioMax} × lowMhz (got ${b.lowMhz}–${b.highMhz})` });
       } else if (b.designMhz < b.lowMhz || b.designMhz > b.highMhz) {
         ctx.addIssue({ code: "custom", path: ["bands", i, "designMhz"], message: `designMhz must lie inside the band ${b.lowMhz}–${b.highMhz} (got ${b.designMhz})` });
+      } else if (b.wireDiameterMm / 2000 > S.radiusMaxWl * wavelengthM(b.designMhz * 1e6)) {
+        ctx.addIssue({ code: "custom", path: ["bands", i, "wireDiameterMm"], message: `wireDiameterMm must be at most ${2 * S.radiusMaxWl} wavelengths (${Number((2000 * S.radiusMaxWl * wavelengthM(b.designMhz * 1e6)).toPrecision(3))} mm at ${b.designMhz} MHz)` });
       }
     });
     for (const [key, list] of [["lengthsWl", g.lengthsWl], ["piecesPerArm", g.piecesPerArm], ["variants", g.variants]] as const) {
@@ -60,26 +71,27 @@ export const gridSchema = z
 export type Grid = z.output<typeof gridSchema>;
 export type Band = Grid["bands"][number];
 
-export function parseGrid(text: string, label: string): Grid {
+/** Parses grid YAML text; throws InputError with one line on any problem (warnings are not printed). */
+export function parseGrid(source: string, label: string): Grid {
+  const body = checkTextLimits(source, label, { maxChars: G.fileBytesMax, maxDepth: G.nestingMax, syntax: "yaml", maxIndent: G.indentMax, maxKeys: G.keysMax });
   let raw: unknown;
   try {
-    raw = parseYaml(text);
-  } catch (err) {
-    if (err instanceof YAMLParseError) {
+    const doc = parseDocument(body, { prettyErrors: true, logLevel: "silent" });
+    const err = doc.errors[0];
+    if (err) {
       const pos = err.linePos?.[0];
       throw new InputError(`${label}${pos ? `:${pos.line}:${pos.col}` : ""}: YAML syntax error: ${err.message.split("\n")[0]}`);
     }
-    throw new InputError(`${label}: cannot be read as YAML`);
+    raw = doc.toJS({ maxAliasCount: 100 });
+  } catch (err) {
+    if (err instanceof InputError) throw err;
+    throw new InputError(`${label}: cannot be read as YAML (${err instanceof Error ? err.message.split("\n")[0] : String(err)})`);
   }
   const result = gridSchema.safeParse(raw);
-  if (!result.success) {
-    const issue = result.error.issues[0];
-    const where = fieldPath(issue.path);
-    if (issue.code === "unrecognized_keys") throw new InputError(`${label}: ${where}: unknown field ${(issue as { keys: string[] }).keys.join(", ")}`);
-    throw new InputError(`${label}: ${where}: ${issue.message}`);
-  }
+  if (!result.success) throw new InputError(zodMessage(label, result.error).replace(" (allowed fields are listed in README.md)", " (the fields are those of designs/grid.yaml)"));
   return result.data;
 }
+
 
 export interface CellRequest {
   id: string;

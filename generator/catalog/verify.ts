@@ -1,14 +1,35 @@
 // `verify`: every entry in the folder must pass its schema and content hash and carry the input
-// hash its grid cell expects; a seeded sample is recomputed and must come out byte for byte the same.
+// hash its grid cell expects; every grid cell must have its entry; every reference search the grid
+// needs must be present, intact and current; no temporary file of a stopped run may remain; a seeded
+// sample is recomputed and must come out byte for byte the same. Each kind of problem is counted.
 import { computeEntry, computeReference, entryInputHash, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
 import { expandGrid, type Grid } from "./grid.js";
 import { createRng } from "../optimize/rng.js";
-import { checkEntryText, entryFile, listJson, readReference, referenceDir, serialize } from "./store.js";
+import { checkEntryText, checkReferenceText, entryFile, listJson, listJsonOf, readReference, referenceDir, serialize } from "./store.js";
+import { strayTempFiles } from "../fsAtomic.js";
 import { readFile } from "node:fs/promises";
+import { join } from "node:path";
+
+export const PROBLEM_KINDS = ["damaged", "stale", "notInGrid", "missing", "referenceDamaged", "referenceStale", "referenceMissing", "temporary", "differs"] as const;
+export type ProblemKind = (typeof PROBLEM_KINDS)[number];
+
+export const KIND_WORDS: Record<ProblemKind, string> = {
+  damaged: "damaged entries",
+  stale: "stale entries",
+  notInGrid: "entries not in the grid",
+  missing: "missing entries",
+  referenceDamaged: "damaged reference searches",
+  referenceStale: "stale reference searches",
+  referenceMissing: "missing reference searches",
+  temporary: "temporary files of a stopped run",
+  differs: "entries that recompute differently",
+};
 
 export interface VerifyReport {
   checked: number;
+  referencesChecked: number;
   problems: string[];
+  counts: Record<ProblemKind, number>;
   missing: string[];
   recomputed: string[];
 }
@@ -22,22 +43,45 @@ async function referenceFor(grid: Grid, dir: string, key: ReferenceKey): Promise
 }
 
 export async function verifyCatalog(grid: Grid, dir: string, sample: number, seed = 1): Promise<VerifyReport> {
+  const names = await listJsonOf(dir, "verify"); // a missing folder or a file is an InputError
   const cells = new Map(expandGrid(grid).map((c) => [c.id, c]));
-  const names = await listJson(dir);
   const problems: string[] = [];
+  const counts = Object.fromEntries(PROBLEM_KINDS.map((k) => [k, 0])) as Record<ProblemKind, number>;
+  const report = (kind: ProblemKind, line: string) => { counts[kind]++; problems.push(line); };
   const good: string[] = [];
   for (const name of names) {
     const id = name.replace(/\.json$/, "");
     const text = await readFile(entryFile(dir, id), "utf8");
     const c = checkEntryText(text, entryFile(dir, id));
-    if (!c.ok) { problems.push(c.problem); continue; }
+    if (!c.ok) { report("damaged", c.problem); continue; }
     const cell = cells.get(id);
-    if (!cell) { problems.push(`${id}: not a cell of the grid`); continue; }
-    if (c.value.inputHash !== entryInputHash(grid, cell)) { problems.push(`${id}: input hash differs from the grid's (stale: run generate)`); continue; }
+    if (!cell) { report("notInGrid", `${id}: not a cell of the grid`); continue; }
+    if (c.value.inputHash !== entryInputHash(grid, cell)) { report("stale", `${id}: input hash differs from the grid's (stale: run generate)`); continue; }
     good.push(id);
   }
   const present = new Set(names.map((n) => n.replace(/\.json$/, "")));
   const missing = [...cells.keys()].filter((id) => !present.has(id));
+  for (const id of missing) report("missing", `${id}: no entry (run generate)`);
+
+  // every reference search the grid's cells start from, and the chain of shorter ones
+  const refDir = referenceDir(dir);
+  const needed = new Map<string, ReferenceKey>();
+  for (const c of cells.values()) {
+    for (let k: ReferenceKey | null = { lengthWl: c.lengthWl, piecesPerArm: c.piecesPerArm, variant: c.variant }; k; k = previousKey(k)) needed.set(referenceId(k), k);
+  }
+  const refNames = await listJson(refDir);
+  for (const name of refNames) {
+    const id = name.replace(/\.json$/, "");
+    const c = checkReferenceText(await readFile(join(refDir, name), "utf8"), join(refDir, name));
+    if (!c.ok) { report("referenceDamaged", c.problem); continue; }
+    const key = needed.get(id);
+    if (!key) report("referenceStale", `${join(refDir, name)}: not a reference search of this grid`);
+    else if (c.value.inputHash !== referenceHash(grid, key)) report("referenceStale", `${join(refDir, name)}: input hash differs from the grid's (stale: run generate)`);
+  }
+  const refPresent = new Set(refNames.map((n) => n.replace(/\.json$/, "")));
+  for (const id of needed.keys()) if (!refPresent.has(id)) report("referenceMissing", `${join(refDir, `${id}.json`)}: no reference search (run generate)`);
+  for (const d of [dir, refDir]) for (const t of await strayTempFiles(d)) report("temporary", `${join(d, t)}: temporary file of a stopped run (the next generate removes it)`);
+
   // seeded sample without replacement (partial Fisher–Yates)
   const rng = createRng(seed);
   const pool = [...good];
@@ -53,7 +97,7 @@ export async function verifyCatalog(grid: Grid, dir: string, sample: number, see
     const reference = await referenceFor(grid, dir, key);
     const again = serialize(computeEntry(grid, cell, reference));
     const stored = await readFile(entryFile(dir, id), "utf8");
-    if (again !== stored) problems.push(`${id}: recomputing it gives different bytes`);
+    if (again !== stored) report("differs", `${id}: recomputing it gives different bytes`);
   }
-  return { checked: names.length, problems, missing, recomputed: picked };
+  return { checked: names.length, referencesChecked: refNames.length, problems, counts, missing, recomputed: picked };
 }

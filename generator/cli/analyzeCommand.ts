@@ -2,12 +2,15 @@
 import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
 import { solutionSummary, type SolutionSummary } from "../analysis/solutionSummary.js";
 import { parseShape, solveShape, type Shape } from "../em/index.js";
+import { checkProblemSize } from "../em/shapeFile.js";
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH } from "../em/mesh.js";
+import { SHAPE_BOUNDS } from "../bounds.js";
+import { InputError } from "../errors.js";
 import { analysisText } from "./analysisText.js";
-import { readInputFile } from "./errors.js";
+import { printable, readInputFile } from "./errors.js";
 import { complexText, fixed } from "./format.js";
 import { applyGroundFlags, groundSummary, groundText } from "./groundOptions.js";
 import type { Ground } from "../em/ground.js";
-import { InputError } from "../errors.js";
 
 export interface AnalyzeOptions {
   json?: boolean;
@@ -18,13 +21,28 @@ export interface AnalyzeOptions {
   seed: number;
   ground?: Ground;
   heightM?: number;
+  /** Flags typed on the command line (not defaults): those that need --band-mhz are refused without it. */
+  given?: string[];
+}
+
+const NEEDS_BAND: Record<string, string> = { lineOhm: "--line-ohm", toleranceSamples: "--tolerance-samples", seed: "--seed" };
+
+/** Refuses a report whose figures are not finite: the input lies outside what the solver handles. */
+export function checkFinite(label: string, s: SolutionSummary): void {
+  const figures: [string, number][] = [
+    ["input impedance", s.inputImpedanceOhm.re], ["input impedance", s.inputImpedanceOhm.im], ["peak gain", s.peakGainDbi],
+    ["peak directivity", s.peakDirectivityDbi], ["efficiency", s.radiationEfficiency],
+  ];
+  for (const [what, v] of figures) {
+    if (!Number.isFinite(v)) throw new InputError(`${label}: the solve gives a non-finite ${what}; the shape lies outside what the solver handles (see the input bounds in README.md)`);
+  }
 }
 
 export { solutionSummary, type SolutionSummary };
 
 export function summaryText(label: string, s: SolutionSummary): string {
   const lines = [
-    `${label}`,
+    printable(label), // a name from a file may hold terminal escape sequences
     `  frequency            ${fixed(s.frequencyHz / 1e6, 4)} MHz`,
     `  unknowns / segments  ${s.unknowns} / ${s.segments}`,
     `  input impedance      ${complexText(s.inputImpedanceOhm, 2)}`,
@@ -40,22 +58,36 @@ export function summaryText(label: string, s: SolutionSummary): string {
 }
 
 export async function loadShape(path: string): Promise<Shape> {
-  return parseShape(await readInputFile(path, "analyze"), path);
+  return parseShape(await readInputFile(path, "analyze", SHAPE_BOUNDS.fileBytesMax), path);
 }
 
 export async function analyzeCommand(path: string, options: AnalyzeOptions): Promise<void> {
+  if (!options.bandMhz) {
+    const stray = (options.given ?? []).map((k) => NEEDS_BAND[k]).filter(Boolean);
+    if (stray.length) throw new InputError(`analyze: ${stray.join(", ")} ${stray.length > 1 ? "apply" : "applies"} only with --band-mhz LO:HI (the band sweep, feed match and tolerance study)`);
+  }
   const loaded = applyGroundFlags(await loadShape(path), options, path);
   if (loaded.ground && options.bandMhz) {
     throw new InputError("analyze: --band-mhz is not available over ground yet (its sweep, match and pattern figures are free-space ones); run without it");
   }
   const shape = options.segmentsPerWavelength ? { ...loaded, segmentsPerWavelength: options.segmentsPerWavelength } : loaded;
+  if (options.segmentsPerWavelength) checkProblemSize(shape, options.segmentsPerWavelength, path);
   const analysisOptions = options.bandMhz && {
     bandHz: options.bandMhz,
     lineImpedanceOhm: options.lineOhm,
     tolerance: { ...DEFAULT_TOLERANCE, samples: options.toleranceSamples, seed: options.seed },
   };
-  if (analysisOptions) checkAnalysisOptions(shape.frequencyHz, analysisOptions);
+  if (analysisOptions) {
+    checkAnalysisOptions(shape.frequencyHz, analysisOptions);
+    // every solve of the analysis stays within the bounds: the sweep keeps the mesh and moves the
+    // frequency up to the band's high edge; the convergence check doubles the segments
+    const spw = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
+    const highHz = analysisOptions.bandHz[1];
+    checkProblemSize({ ...shape, frequencyHz: highHz }, (spw * shape.frequencyHz) / highHz, `${path} (at the band's high edge)`);
+    checkProblemSize(shape, 2 * spw, `${path} (the convergence check at twice the segments per wavelength)`);
+  }
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  checkFinite(path, summary);
   const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;
   if (options.json) {
     const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks, feed: analysis.feed };

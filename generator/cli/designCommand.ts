@@ -5,12 +5,15 @@ import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
 import { designResult, overGroundReport, parametersReport } from "../design/designResult.js";
 import type { DesignRequest } from "../design/request.js";
 import { requestFromInputs } from "../design/requestInput.js";
+import type { Ground } from "../em/ground.js";
+import { InputError } from "../errors.js";
 import { writeFileAtomic } from "../fsAtomic.js";
+import { SHAPE_BOUNDS } from "../bounds.js";
+import { wavelengthM } from "../units.js";
 import { summaryText } from "./analyzeCommand.js";
 import { designOffCentreCommand } from "./designOffCentreCommand.js";
 import { fixed, table } from "./format.js";
-import type { Ground } from "../em/ground.js";
-import { InputError } from "../errors.js";
+import { checkOutputFile } from "./targets.js";
 
 export { parametersReport };
 
@@ -26,6 +29,8 @@ export interface DesignFlags {
   seed: number;
   json?: boolean;
   out?: string;
+  /** Write --out even when no shape met the limits. */
+  keepInfeasible?: boolean;
   /** "centre" (default) or "off-centre" (designOffCentreCommand.ts). */
   family?: string;
   ground?: Ground;
@@ -34,12 +39,25 @@ export interface DesignFlags {
   objective?: string;
 }
 
+/** Exit status of a design whose search found no shape meeting every limit (README.md says so). */
+export const INFEASIBLE_EXIT = 3;
+
+/** The solver's advice names a shape-file option; design's own flags are the wire and its length. */
+const forDesign = (message: string): string =>
+  message.replace(/lengthen the piece or use fewer segments per wavelength/g, "use a thinner wire (--wire-diameter-mm) or a longer one (--length-wl)");
+
 export function requestFromFlags(flags: DesignFlags): DesignRequest {
-  return requestFromInputs({ ...flags, bandHz: flags.bandMhz });
+  const request = requestFromInputs({ ...flags, bandHz: flags.bandMhz });
+  const lambdaM = wavelengthM(request.frequencyHz);
+  if (flags.wireDiameterMm / 2000 > SHAPE_BOUNDS.radiusMaxWl * lambdaM) {
+    throw new InputError(`design: --wire-diameter-mm ${flags.wireDiameterMm} is too thick for ${flags.freqMhz} MHz; the thin-wire model needs at most ${Number((2000 * SHAPE_BOUNDS.radiusMaxWl * lambdaM).toPrecision(3))} mm (${2 * SHAPE_BOUNDS.radiusMaxWl} wavelengths)`);
+  }
+  return request;
 }
 
 export async function designCommand(flags: DesignFlags): Promise<void> {
   const request = requestFromFlags(flags);
+  if (flags.out !== undefined) await checkOutputFile("--out", flags.out); // before the search, not after it
   if (flags.family === "off-centre") {
     if (request.ground) throw new InputError("design: --family off-centre is computed in free space only for now; leave out --ground and --height-m");
     return designOffCentreCommand(request, flags);
@@ -50,9 +68,22 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const result = designResult(request, outcome);
+  const feasible = outcome.status === "ok";
+  if (!feasible) process.exitCode = INFEASIBLE_EXIT;
+  const message = forDesign(outcome.message);
+  let result;
+  try {
+    result = designResult(request, outcome, message);
+  } catch (err) {
+    // an infeasible best shape may be one the solver refuses (wires touching): report the search alone
+    if (feasible || !(err instanceof InputError)) throw err;
+    if (flags.json) process.stdout.write(`${JSON.stringify({ status: outcome.status, message, evaluations: outcome.evaluations, seed: request.seed, stopReasons: outcome.stopReasons })}\n`);
+    else process.stdout.write(`status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}\n${flags.out ? "no shape file written: the best shape found cannot be solved\n" : ""}`);
+    return;
+  }
   const { shape, parameters } = result;
-  if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
+  const written = flags.out !== undefined && (feasible || flags.keepInfeasible === true);
+  if (written) await writeFileAtomic(flags.out!, `${JSON.stringify(shape, null, 2)}\n`);
   if (flags.json) {
     process.stdout.write(`${JSON.stringify(result)}\n`);
     return;
@@ -63,7 +94,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     rows.push([String(i + 1), fixed(len, 4), turn]);
   });
   const lines = [
-    `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
+    `status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
     summaryText(shape.name, result),
     "",
     "right arm, from the feed outward (the left arm is its mirror image):",
@@ -76,6 +107,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
   }
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
-  if (flags.out) lines.push(`shape written to ${flags.out}`);
+  if (written) lines.push(`shape written to ${flags.out}`);
+  else if (flags.out !== undefined) lines.push(`no shape file written: no shape met every limit (add --keep-infeasible to write it anyway)`);
   process.stdout.write(`${lines.join("\n")}\n`);
 }

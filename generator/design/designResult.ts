@@ -41,12 +41,12 @@ export function overGroundReport(request: DesignRequest, outcome: DesignOutcome,
   };
 }
 
-export function designResult(request: DesignRequest, outcome: DesignOutcome) {
+export function designResult(request: DesignRequest, outcome: DesignOutcome, message = outcome.message) {
   const shape = designShape(outcome.x, request);
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   return {
     status: outcome.status,
-    message: outcome.message,
+    message,
     variant: request.variant,
     ...summary,
     maxSwrInBand: outcome.evaluation.maxSwr,
