@@ -15,6 +15,26 @@ import { limitsOf, type DesignRequest } from "./request.js";
 export const SWEEP_POINTS_IN_BAND = 11;
 const SEARCH_SWR_POINTS = 3; // band edges and centre; the polish checks all 11
 
+/**
+ * When the search stops (scores in dB, parameters in box units z ∈ [0, 1]): a CMA-ES run ends when its
+ * best and latest scores span less than tolFun dB over 10 + ⌈30n/λ⌉ generations, or its spread falls
+ * below tolX (Hansen's tutorial, App. B.3); IPOP ends once `staleRestarts` restarts in a row each
+ * raised the best gain by less than `minRestartGain` dB. The polish that follows refines to 1e-5.
+ */
+export const SEARCH_STOPPING: SearchStopping = { tolFun: 0.01, tolX: 0.01, staleRestarts: 1, minRestartGain: 0.03 };
+
+/** Nelder–Mead polish: simplex within this in z and its scores within this in dB. */
+const POLISH_TOL = 1e-4;
+
+export interface SearchStopping {
+  tolFun: number;
+  tolX: number;
+  tolHistFun?: number;
+  /** Omitted: restarts continue until maxRestarts or the budget. */
+  staleRestarts?: number;
+  minRestartGain?: number;
+}
+
 export interface DesignOutcome {
   status: "ok" | "infeasible";
   message: string;
@@ -33,7 +53,7 @@ export interface DesignProgress {
 
 export function designBentArm(
   r: DesignRequest,
-  options: { start?: number[]; polishOnly?: boolean; onProgress?: (p: DesignProgress) => void } = {},
+  options: { start?: number[]; polishOnly?: boolean; onProgress?: (p: DesignProgress) => void; stopping?: SearchStopping } = {},
 ): DesignOutcome {
   const n = 2 * r.piecesPerArm - 1;
   const { lower, upper } = parameterBounds(specOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
@@ -71,8 +91,7 @@ export function designBentArm(
       seed: r.seed,
       maxEvaluations: r.maxEvaluations ?? 500 * n + 500,
       maxRestarts: 4,
-      tolFun: 1e-4,
-      tolX: 1e-4,
+      ...(options.stopping ?? SEARCH_STOPPING),
     });
     while (ipop.stop().length === 0) {
       const zs = ipop.ask();
@@ -90,8 +109,8 @@ export function designBentArm(
     lowerBounds: new Array(n).fill(0),
     upperBounds: new Array(n).fill(1),
     maxEvaluations: 60 * n,
-    tolX: 1e-5,
-    tolFun: 1e-5,
+    tolX: POLISH_TOL,
+    tolFun: POLISH_TOL,
   });
   history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + searchEvaluations, bestF: h.bestF })));
   const x = toX(polish.x);

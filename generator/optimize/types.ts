@@ -5,6 +5,9 @@ export type StopReasonName =
   | "tolFun" // range of recent f values below tolFun
   | "tolX" // search spread below tolX in every coordinate
   | "tolXUp" // σ·max √λ_i grew more than 10⁴-fold: σ0 too small or divergence
+  | "tolHistFun" // range of the best f over the recent-generation window below tolHistFun
+  | "stagnation" // recent median best and median f no better than older ones
+  | "restartsStale" // IPOP: restarts in a row that improved the best by less than the threshold
   | "equalFunValues" // best f identical over the recent-generation window
   | "conditionCov" // cond(C) above the limit
   | "noEffectAxis" // adding 0.1σ√λ_i b_i leaves the mean unchanged
