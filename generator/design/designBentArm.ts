@@ -5,7 +5,10 @@
 // at the band edges and centre against 97.5 % of the limit, the polish at all 11 against the limit itself.
 // `start` skips the search and only polishes (a shape found in wavelength units, re-used per band);
 // with `polishOnly: false` the search runs from the box centre as usual and the polish begins from
-// whichever of `start` and the search's best scores better.
+// whichever of `start` and the search's best scores better. With `skipPolishAboveSwr`, a polish-only
+// call whose start's worst in-band SWR exceeds that value is not run at all (a Nelder–Mead polish
+// moves the shape locally; from SWR far above the limit it only spends evaluations to end
+// infeasible); the outcome says so in its message and stop reason.
 import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
 import { parameterBounds } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
@@ -53,7 +56,13 @@ export interface DesignProgress {
 
 export function designBentArm(
   r: DesignRequest,
-  options: { start?: number[]; polishOnly?: boolean; onProgress?: (p: DesignProgress) => void; stopping?: SearchStopping } = {},
+  options: {
+    start?: number[];
+    polishOnly?: boolean;
+    onProgress?: (p: DesignProgress) => void;
+    stopping?: SearchStopping;
+    skipPolishAboveSwr?: number;
+  } = {},
 ): DesignOutcome {
   const n = 2 * r.piecesPerArm - 1;
   const { lower, upper } = parameterBounds(specOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
@@ -102,6 +111,24 @@ export function designBentArm(
     stopReasons = result.stopReasons;
     history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
     searchEvaluations = result.evaluations;
+  }
+  if (polishOnly && zStart && options.skipPolishAboveSwr !== undefined) {
+    const x = toX(zStart);
+    const evaluation = evaluate(x, r, polishFrequencies, r.swrLimit);
+    evaluations++;
+    if (evaluation.score >= 0 && evaluation.maxSwr !== null && !(evaluation.maxSwr <= options.skipPolishAboveSwr)) {
+      const swrText = Number.isFinite(evaluation.maxSwr) ? evaluation.maxSwr.toFixed(1) : "∞";
+      return {
+        status: "infeasible",
+        message: `no shape met every constraint: ${evaluation.reasons.join("; ")}; polish skipped, the start's SWR ${swrText} is above ${options.skipPolishAboveSwr}, too far from the limit for a local polish`,
+        x,
+        evaluation,
+        evaluations,
+        searchEvaluations: 0,
+        stopReasons: [{ reason: "startFarFromFeasible", value: Number.isFinite(evaluation.maxSwr) ? evaluation.maxSwr : 1e9 }],
+        history: [{ evaluations, bestF: evaluation.score }],
+      };
+    }
   }
   const polish = nelderMead((z) => score(z, polishFrequencies, r.swrLimit), {
     x0: z0.map(clamp01),

@@ -14,7 +14,8 @@ export type StopReasonName =
   | "noEffectCoord" // adding 0.2σ√C_ii e_i leaves m_i unchanged
   | "maxEvaluations" // the next generation or step would exceed the evaluation budget
   | "maxRestarts" // restart budget used up
-  | "target"; // best f ≤ target
+  | "target" // best f ≤ target
+  | "startFarFromFeasible"; // design level: the polish was skipped, its start is far from feasible (value: its worst SWR)
 
 /** Why a run stopped, with the measured value that triggered it (in the criterion's own unit). */
 export interface StopReason {
