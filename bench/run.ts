@@ -19,9 +19,9 @@ if (wants("solver")) {
   out.cases = cases;
   if (!json) {
     console.log("solver (straight wire, 25 segments/λ, median of 200 runs, ms)");
-    console.log("unknowns  fill     solve    peak     total    | real 2N×2N LU (ml-matrix)");
+    console.log("unknowns  fill     solve    peak     total    | LDLᵀ     real 2N×2N LU (ml-matrix) | previous fill+LU  mirror fill+solve  ratio");
     for (const c of cases) {
-      console.log(`${String(c.unknowns).padEnd(9)} ${ms(c.fillMs).padEnd(8)} ${ms(c.solveMs).padEnd(8)} ${ms(c.peakMs).padEnd(8)} ${ms(c.totalMs).padEnd(8)} | ${ms(c.realFormSolveMs)}`);
+      console.log(`${String(c.unknowns).padEnd(9)} ${ms(c.fillMs).padEnd(8)} ${ms(c.solveMs).padEnd(8)} ${ms(c.peakMs).padEnd(8)} ${ms(c.totalMs).padEnd(8)} | ${ms(c.ldltSolveMs).padEnd(8)} ${ms(c.realFormSolveMs).padEnd(25)} | ${ms(c.previousFillLuMs).padEnd(17)} ${ms(c.mirrorFillSolveMs).padEnd(18)} ${c.previousOverCurrent.toFixed(2)}×`);
     }
   }
 }
@@ -31,9 +31,9 @@ if (wants("optimizer")) {
   out.optimizer = cases;
   if (!json) {
     console.log("\noptimizer (1.5λ wire, lossless, 5 seeds): evaluations and seconds to come within 0.05 dB of the best");
-    console.log("K  best dBi  evals median  evals worst  s median  s worst  total evals (median)");
+    console.log("K  best dBi  evals median  evals worst  s median  s worst  total evals (median)  CPU s (median)  median dBi");
     for (const c of cases) {
-      console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${c.medianTotalEvaluations}`);
+      console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${String(c.medianTotalEvaluations).padEnd(21)} ${c.medianCpuSeconds.toFixed(2).padEnd(15)} ${c.medianGainDbi.toFixed(3)}`);
     }
   }
 }

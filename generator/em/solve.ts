@@ -7,6 +7,8 @@ import { CONDUCTIVITY_S_PER_M, toDb, wavenumberRadPerM } from "../units.js";
 import { solveComplex } from "./complexLu.js";
 import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
 import { checkMesh } from "./geometryChecks.js";
+import { fillImpedanceMirror, solveMirrorSymmetric } from "./mirrorSolve.js";
+import { detectMirrorSymmetry } from "./mirrorSymmetry.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
 import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
@@ -20,6 +22,8 @@ export interface SolveOptions {
   energyBalance?: boolean;
   peak?: PeakOptions;
   rules?: KernelRules;
+  /** Use the mirror-symmetric fill and even-mode solve when the mesh allows (default true). */
+  symmetry?: boolean;
 }
 
 export interface Solution {
@@ -64,7 +68,8 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const mesh = buildMesh(shape, options.segmentsPerWavelength);
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
-  const z = fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
+  const sym = options.symmetry === false ? null : detectMirrorSymmetry(mesh); // dispatch: mirrorSolve.ts
+  const z = sym ? fillImpedanceMirror(mesh, k, sym, options.rules) : fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
   const sigma = conductivityOf(shape.conductor);
   const rPerM = new Float64Array(mesh.segmentCount);
   if (Number.isFinite(sigma)) {
@@ -74,7 +79,8 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const bRe = new Float64Array(mesh.unknowns);
   const bIm = new Float64Array(mesh.unknowns);
   bRe[mesh.feedBasis] = 1; // 1 V delta gap
-  const { re, im } = solveComplex(z, bRe, bIm, true); // z is ours alone: factor it in place
+  // z is ours alone: factor it in place
+  const { re, im } = (sym && solveMirrorSymmetric(z, sym, bRe, bIm)) || solveComplex(z, bRe, bIm, true);
   const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
   const i2 = ir * ir + ii * ii;
   return {
