@@ -13,7 +13,7 @@
 // Source: the even/odd mode decomposition of symmetric structures (Harrington, Field Computation by
 // Moment Methods, 1968, on exploiting symmetry); the algebra above is checked in
 // test/em/mirrorSolve.test.ts against the general fill and LU to 1e-9.
-import { createComplexMatrix, type ComplexMatrix } from "./complexLu.js";
+import { createComplexMatrix, solveComplex, type ComplexMatrix } from "./complexLu.js";
 import { solveComplexSymmetric } from "./complexLdlt.js";
 import { BLOCK_STRIDE, pairBlock, scatterBlock } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
@@ -97,4 +97,16 @@ export function solveMirrorSymmetric(z: ComplexMatrix, sym: MirrorSymmetry, bRe:
     if (pr !== r) { re[pr] = c * x.re[u]; im[pr] = c * x.im[u]; }
   }
   return { re, im };
+}
+
+/**
+ * The solve solveFeed uses: the even-mode solve when `sym` and b allow it, else LDLᵀ of the whole
+ * (symmetric) matrix; a zero pivot in either (no pivoting) falls back to the pivoted LU. Z unchanged.
+ */
+export function solveImpedanceSystem(z: ComplexMatrix, sym: MirrorSymmetry | null, bRe: Float64Array, bIm: Float64Array): { re: Float64Array; im: Float64Array } {
+  try {
+    return (sym && solveMirrorSymmetric(z, sym, bRe, bIm)) || solveComplexSymmetric(z, bRe, bIm);
+  } catch {
+    return solveComplex(z, bRe, bIm);
+  }
 }

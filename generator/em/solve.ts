@@ -4,10 +4,9 @@
 //   G = 4πU_max / P_in,  D = 4πU_max / P_rad,  e = P_rad / P_in   (IEEE Std 145-2013 definitions).
 // Energy balance: |∫U dΩ − P_rad| / P_rad, a check that the matrix and the far field agree.
 import { CONDUCTIVITY_S_PER_M, toDb, wavenumberRadPerM } from "../units.js";
-import { solveComplex } from "./complexLu.js";
 import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
 import { checkMesh } from "./geometryChecks.js";
-import { fillImpedanceMirror, solveMirrorSymmetric } from "./mirrorSolve.js";
+import { fillImpedanceMirror, solveImpedanceSystem } from "./mirrorSolve.js";
 import { detectMirrorSymmetry } from "./mirrorSymmetry.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
@@ -79,8 +78,7 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const bRe = new Float64Array(mesh.unknowns);
   const bIm = new Float64Array(mesh.unknowns);
   bRe[mesh.feedBasis] = 1; // 1 V delta gap
-  // z is ours alone: factor it in place
-  const { re, im } = (sym && solveMirrorSymmetric(z, sym, bRe, bIm)) || solveComplex(z, bRe, bIm, true);
+  const { re, im } = solveImpedanceSystem(z, sym, bRe, bIm); // even mode, LDLᵀ, or LU (mirrorSolve.ts)
   const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
   const i2 = ir * ir + ii * ii;
   return {
