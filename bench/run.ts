@@ -48,7 +48,7 @@ if (wants("catalog")) {
   const c = await benchCatalog(only === "catalog-full");
   out.catalog = c;
   if (!json) {
-    console.log(`\ncatalog: ${c.smallGridEntries}-entry grid from scratch: 1 worker ${c.oneWorkerS.toFixed(1)} s, 2 workers ${c.twoWorkersS.toFixed(1)} s (speed-up ${c.speedup.toFixed(2)}×)`);
+    console.log(`\ncatalog: ${c.smallGridEntries}-entry grid from scratch: 1 worker ${c.oneWorkerS.toFixed(1)} s, 2 workers ${c.twoWorkersS.toFixed(1)} s (speed-up ${c.speedup.toFixed(2)}×); CPU ${c.oneWorkerCpuS.toFixed(1)} s and ${c.twoWorkersCpuS.toFixed(1)} s`);
     console.log(`  default grid with a warm cache: ${c.warmCacheS.toFixed(2)} s`);
     console.log(`  1.5λ K = 3 in 3 bands: reference + polish ${c.referencePlusPolishS.toFixed(1)} s, full search per band ${c.searchPerBandS.toFixed(1)} s; polish gives up at most ${c.polishGainShortfallDb.toFixed(3)} dB`);
     if (c.fullGridFromScratchS !== null) console.log(`  default grid from scratch, 2 workers: ${(c.fullGridFromScratchS / 60).toFixed(1)} min`);
