@@ -20,16 +20,21 @@ function smallGrid(grid: Grid): Grid {
   return { ...grid, bands: grid.bands.slice(2, 6), lengthsWl: [1, 1.5, 2, 2.5], piecesPerArm: [1, 2], variants: ["max-gain"] };
 }
 
-async function timeGenerate(grid: Grid, workers: number, outDir = mkdtempSync(join(tmpdir(), "bentwire-bench-"))): Promise<number> {
+/** Wall seconds of one generate run; CPU seconds (process.cpuUsage: every thread, workers included) go to `cpu`. */
+async function timeGenerate(grid: Grid, workers: number, outDir = mkdtempSync(join(tmpdir(), "bentwire-bench-")), cpu: number[] = []): Promise<number> {
+  const c0 = process.cpuUsage();
   const report = await generate({ grid, outDir, workers });
+  const c = process.cpuUsage(c0);
+  cpu.push((c.user + c.system) / 1e6);
   return report.seconds;
 }
 
 export async function benchCatalog(full: boolean) {
   const grid = loadGrid("designs/grid.yaml");
   const small = smallGrid(grid);
-  const oneWorkerS = await timeGenerate(small, 1);
-  const twoWorkersS = await timeGenerate(small, 2);
+  const cpu: number[] = [];
+  const oneWorkerS = await timeGenerate(small, 1, undefined, cpu);
+  const twoWorkersS = await timeGenerate(small, 2, undefined, cpu);
   const warmS = await timeGenerate(grid, 2, "designs/entries");
   // reference + polish per band against a full search per band, for 1.5λ K = 3 max-gain in 3 bands
   const cells = expandGrid(grid).filter((c) => c.lengthWl === 1.5 && c.piecesPerArm === 3 && c.variant === "max-gain").slice(0, 3);
@@ -48,6 +53,8 @@ export async function benchCatalog(full: boolean) {
     smallGridEntries: expandGrid(small).length,
     oneWorkerS,
     twoWorkersS,
+    oneWorkerCpuS: cpu[0],
+    twoWorkersCpuS: cpu[1],
     speedup: oneWorkerS / twoWorkersS,
     warmCacheS: warmS,
     referencePlusPolishS: sharedS,

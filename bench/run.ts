@@ -20,9 +20,9 @@ if (wants("solver")) {
   out.cases = cases;
   if (!json) {
     console.log("solver (straight wire, 25 segments/λ, median of 200 runs, ms)");
-    console.log("unknowns  fill     solve    peak     total    | real 2N×2N LU (ml-matrix)");
+    console.log("unknowns  fill     solve    peak     total    | LDLᵀ     real 2N×2N LU (ml-matrix) | previous fill+LU  mirror fill+solve  ratio");
     for (const c of cases) {
-      console.log(`${String(c.unknowns).padEnd(9)} ${ms(c.fillMs).padEnd(8)} ${ms(c.solveMs).padEnd(8)} ${ms(c.peakMs).padEnd(8)} ${ms(c.totalMs).padEnd(8)} | ${ms(c.realFormSolveMs)}`);
+      console.log(`${String(c.unknowns).padEnd(9)} ${ms(c.fillMs).padEnd(8)} ${ms(c.solveMs).padEnd(8)} ${ms(c.peakMs).padEnd(8)} ${ms(c.totalMs).padEnd(8)} | ${ms(c.ldltSolveMs).padEnd(8)} ${ms(c.realFormSolveMs).padEnd(25)} | ${ms(c.previousFillLuMs).padEnd(17)} ${ms(c.mirrorFillSolveMs).padEnd(18)} ${c.previousOverCurrent.toFixed(2)}×`);
     }
   }
 }
@@ -41,9 +41,9 @@ if (wants("optimizer")) {
   out.optimizer = cases;
   if (!json) {
     console.log("\noptimizer (1.5λ wire, lossless, 5 seeds): evaluations and seconds to come within 0.05 dB of the best");
-    console.log("K  best dBi  evals median  evals worst  s median  s worst  total evals (median)");
+    console.log("K  best dBi  evals median  evals worst  s median  s worst  total evals (median)  CPU s (median)  median dBi");
     for (const c of cases) {
-      console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${c.medianTotalEvaluations}`);
+      console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${String(c.medianTotalEvaluations).padEnd(21)} ${c.medianCpuSeconds.toFixed(2).padEnd(15)} ${c.medianGainDbi.toFixed(3)}`);
     }
   }
 }
@@ -58,7 +58,7 @@ if (wants("catalog")) {
   const c = await benchCatalog(only === "catalog-full");
   out.catalog = c;
   if (!json) {
-    console.log(`\ncatalog: ${c.smallGridEntries}-entry grid from scratch: 1 worker ${c.oneWorkerS.toFixed(1)} s, 2 workers ${c.twoWorkersS.toFixed(1)} s (speed-up ${c.speedup.toFixed(2)}×)`);
+    console.log(`\ncatalog: ${c.smallGridEntries}-entry grid from scratch: 1 worker ${c.oneWorkerS.toFixed(1)} s, 2 workers ${c.twoWorkersS.toFixed(1)} s (speed-up ${c.speedup.toFixed(2)}×); CPU ${c.oneWorkerCpuS.toFixed(1)} s and ${c.twoWorkersCpuS.toFixed(1)} s`);
     console.log(`  default grid with a warm cache: ${c.warmCacheS.toFixed(2)} s`);
     console.log(`  1.5λ K = 3 in 3 bands: reference + polish ${c.referencePlusPolishS.toFixed(1)} s, full search per band ${c.searchPerBandS.toFixed(1)} s; polish gives up at most ${c.polishGainShortfallDb.toFixed(3)} dB`);
     if (c.fullGridFromScratchS !== null) console.log(`  default grid from scratch, 2 workers: ${(c.fullGridFromScratchS / 60).toFixed(1)} min`);

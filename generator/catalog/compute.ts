@@ -4,7 +4,9 @@
 // and band (Nelder–Mead). If the polished shape misses a constraint that the reference met (a
 // direct-feed band wider than the reference one, say), that band gets a full search of its own; if
 // the reference met none either (a centre-fed 1 λ or 2 λ wire sits at a current minimum, kilohms,
-// far from 50 Ω), the entry says so without a search. Pure: same inputs, same bytes.
+// far from 50 Ω), the entry says so without a search, and when that shape's SWR in the band is also
+// above DOOMED_POLISH_SWR_FACTOR × the limit it is not even polished (the entry's optimizer record
+// says "startFarFromFeasible"). Pure: same inputs, same bytes.
 import { analyzeDesign } from "../analysis/index.js";
 import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
@@ -112,10 +114,15 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
   }));
 }
 
+/** A reference that met no constraint is not polished when its band SWR exceeds this × the limit. */
+export const DOOMED_POLISH_SWR_FACTOR = 2;
+
 export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
   const request = bandRequest(grid, cell);
-  // polish the reference shape (or, when the reference met no constraint, its least-bad attempt)
-  let outcome = designBentArm(request, { start: reference.x });
+  // polish the reference shape (or, when the reference met no constraint, its least-bad attempt,
+  // unless that attempt is too far from the SWR limit for a local polish to reach it)
+  const skipPolishAboveSwr = reference.status === "ok" ? undefined : DOOMED_POLISH_SWR_FACTOR * request.swrLimit;
+  let outcome = designBentArm(request, { start: reference.x, skipPolishAboveSwr });
   let startedFrom: "reference" | "search" = "reference";
   if (outcome.status !== "ok" && reference.status === "ok") {
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh

@@ -5,7 +5,10 @@
 // at the band edges and centre against 97.5 % of the limit, the polish at all 11 against the limit itself.
 // `start` skips the search and only polishes (a shape found in wavelength units, re-used per band);
 // with `polishOnly: false` the search runs from the box centre as usual and the polish begins from
-// whichever of `start` and the search's best scores better.
+// whichever of `start` and the search's best scores better. With `skipPolishAboveSwr`, a polish-only
+// call whose start's worst in-band SWR exceeds that value is not run at all (a Nelder–Mead polish
+// moves the shape locally; from SWR far above the limit it only spends evaluations to end
+// infeasible); the outcome says so in its message and stop reason.
 import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
 import { parameterBounds } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
@@ -14,6 +17,26 @@ import { limitsOf, type DesignRequest } from "./request.js";
 
 export const SWEEP_POINTS_IN_BAND = 11;
 const SEARCH_SWR_POINTS = 3; // band edges and centre; the polish checks all 11
+
+/**
+ * When the search stops (scores in dB, parameters in box units z ∈ [0, 1]): a CMA-ES run ends when its
+ * best and latest scores span less than tolFun dB over 10 + ⌈30n/λ⌉ generations, or its spread falls
+ * below tolX (Hansen's tutorial, App. B.3); IPOP ends once `staleRestarts` restarts in a row each
+ * raised the best gain by less than `minRestartGain` dB. The polish that follows refines to 1e-5.
+ */
+export const SEARCH_STOPPING: SearchStopping = { tolFun: 0.01, tolX: 0.01, staleRestarts: 1, minRestartGain: 0.03 };
+
+/** Nelder–Mead polish: simplex within this in z and its scores within this in dB. */
+const POLISH_TOL = 1e-4;
+
+export interface SearchStopping {
+  tolFun: number;
+  tolX: number;
+  tolHistFun?: number;
+  /** Omitted: restarts continue until maxRestarts or the budget. */
+  staleRestarts?: number;
+  minRestartGain?: number;
+}
 
 export interface DesignOutcome {
   status: "ok" | "infeasible";
@@ -35,7 +58,13 @@ export interface DesignProgress {
 
 export function designBentArm(
   r: DesignRequest,
-  options: { start?: number[]; polishOnly?: boolean; onProgress?: (p: DesignProgress) => void } = {},
+  options: {
+    start?: number[];
+    polishOnly?: boolean;
+    onProgress?: (p: DesignProgress) => void;
+    stopping?: SearchStopping;
+    skipPolishAboveSwr?: number;
+  } = {},
 ): DesignOutcome {
   const n = 2 * r.piecesPerArm - 1;
   const { lower, upper } = parameterBounds(specOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
@@ -75,8 +104,7 @@ export function designBentArm(
       seed: r.seed,
       maxEvaluations: r.maxEvaluations ?? 500 * n + 500,
       maxRestarts: 4,
-      tolFun: 1e-4,
-      tolX: 1e-4,
+      ...(options.stopping ?? SEARCH_STOPPING),
     });
     while (ipop.stop().length === 0) {
       const zs = ipop.ask();
@@ -88,14 +116,32 @@ export function designBentArm(
     history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
     searchEvaluations = result.evaluations;
   }
+  if (polishOnly && zStart && options.skipPolishAboveSwr !== undefined) {
+    const x = toX(zStart);
+    const evaluation = evaluate(x, r, polishFrequencies, r.swrLimit);
+    evaluations++;
+    if (evaluation.score >= 0 && evaluation.maxSwr !== null && !(evaluation.maxSwr <= options.skipPolishAboveSwr)) {
+      const swrText = Number.isFinite(evaluation.maxSwr) ? evaluation.maxSwr.toFixed(1) : "∞";
+      return {
+        status: "infeasible",
+        message: `no shape met every constraint: ${evaluation.reasons.join("; ")}; polish skipped, the start's SWR ${swrText} is above ${options.skipPolishAboveSwr}, too far from the limit for a local polish`,
+        x,
+        evaluation,
+        evaluations,
+        searchEvaluations: 0,
+        stopReasons: [{ reason: "startFarFromFeasible", value: Number.isFinite(evaluation.maxSwr) ? evaluation.maxSwr : 1e9 }],
+        history: [{ evaluations, bestF: evaluation.score }],
+      };
+    }
+  }
   const polish = nelderMead((z) => score(z, polishFrequencies, r.swrLimit), {
     x0: z0.map(clamp01),
     initialStep: polishOnly ? 0.01 : 0.02,
     lowerBounds: new Array(n).fill(0),
     upperBounds: new Array(n).fill(1),
     maxEvaluations: 60 * n,
-    tolX: 1e-5,
-    tolFun: 1e-5,
+    tolX: POLISH_TOL,
+    tolFun: POLISH_TOL,
   });
   history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + searchEvaluations, bestF: h.bestF })));
   const x = toX(polish.x);

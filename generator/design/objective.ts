@@ -4,9 +4,12 @@
 //   feasible                  → −G_peak (dBi)
 // `max-gain` maximises peak gain in any direction at the design frequency. `direct-feed` does the
 // same subject to SWR ≤ limit against the line impedance at every checked frequency of the band,
-// so the shape needs no matching network.
+// so the shape needs no matching network. The band is solved on the design frequency's mesh (fixed
+// across the band, like a published fixed-mesh sweep), by matrix interpolation when it is at most 8 %
+// wide (em/frequencyInterpolation.ts).
 import { swr as swrOf } from "../analysis/swr.js";
-import { solveFeed, solveShape, type Shape } from "../em/index.js";
+import { bandImpedances } from "../em/frequencyInterpolation.js";
+import { solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { toShape, unpack, type BentArmSpec } from "../shapes/bentArm.js";
 import { constraintViolation } from "../shapes/constraints.js";
@@ -52,11 +55,11 @@ export function evaluate(x: readonly number[], r: DesignRequest, swrFrequenciesH
     const solution = solveShape(shapeOf(x, r), objectiveSolveOptions(r)); // over ground: peak in the objective's window
     const gainDbi = solution.peakGainDbi;
     if (r.variant === "max-gain") return { score: -gainDbi, gainDbi, maxSwr: null, reasons: [] };
+    // the other frequencies on the design frequency's mesh, interpolated where the band is narrow
+    const others = swrFrequenciesHz.filter((f) => f !== r.frequencyHz);
+    const zs = [...bandImpedances(shapeOf(x, r), others), ...(others.length < swrFrequenciesHz.length ? [solution.inputImpedanceOhm] : [])];
     let maxSwr = 0;
-    for (const f of swrFrequenciesHz) {
-      const z = f === r.frequencyHz ? solution.inputImpedanceOhm : solveFeed(shapeOf(x, r, f)).inputImpedanceOhm;
-      maxSwr = Math.max(maxSwr, swrOf(z, r.lineImpedanceOhm));
-    }
+    for (const z of zs) maxSwr = Math.max(maxSwr, swrOf(z, r.lineImpedanceOhm));
     if (maxSwr > swrLimit) {
       const excess = Number.isFinite(maxSwr) ? maxSwr - swrLimit : 1e3;
       return { score: SWR_PENALTY + excess, gainDbi, maxSwr, reasons: [`SWR reaches ${maxSwr.toFixed(2)} in the band, above ${swrLimit}`] };

@@ -5,6 +5,9 @@
 // so the segment adds L ŝ [I1 A0 + (I2 − I1) A1]. With e^{jωt} time dependence
 //   r·E = −jωμ/(4π) N⊥ e^{−jkr},  U = r²|E|²/(2η) = k²η/(32π²) (|Nθ|² + |Nφ|²)
 // (Balanis, Antenna Theory, 3rd ed., §12.3 and eq. 2-12a). Angles as in ISO 80000-2.
+// Node phases by recurrence: the nodes of one straight piece are equally spaced, r_i = r_0 + i·Δ, so
+// E_i = e^{jψ_i} = E_0·w^i with w = e^{jkr̂·Δ}: two sin/cos pairs per piece instead of one per node
+// (the angle-addition formula, e^{j(a+b)} = e^{ja}e^{jb}); rounding grows about i·2⁻⁵³, ~1e-14 here.
 import { ETA0_OHM } from "../units.js";
 import { segmentEndCurrents, type Mesh } from "./mesh.js";
 
@@ -22,6 +25,10 @@ export interface FarFieldPlan {
   planarXy: boolean;
   phaseRe: Float64Array;
   phaseIm: Float64Array;
+  /** Straight runs of equally spaced nodes: first node, node count, step Δ (xyz interleaved). */
+  runFirstNode: Int32Array;
+  runNodeCount: Int32Array;
+  runStep: Float64Array;
 }
 
 export function createFarFieldPlan(mesh: Mesh, re: Float64Array, im: Float64Array, kRadPerM: number): FarFieldPlan {
@@ -46,6 +53,15 @@ export function createFarFieldPlan(mesh: Mesh, re: Float64Array, im: Float64Arra
     if (Math.abs(z0) > 1e-12 || Math.abs(z0 + segVec[3 * s + 2]) > 1e-12) planarXy = false;
   }
   const nodeCount = xyz.length / 3;
+  // runs: the segments of one piece of one wire share direction and length, their nodes are consecutive
+  const runFirst: number[] = [], runCount: number[] = [], runStep: number[] = [];
+  for (let s = 0; s < ns; s++) {
+    const sameRun = s > 0 && mesh.wireOf[s - 1] === mesh.wireOf[s] && mesh.pieceOf[s - 1] === mesh.pieceOf[s];
+    if (sameRun) { runCount[runCount.length - 1] += 1; continue; }
+    runFirst.push(segStartNode[s]);
+    runCount.push(2);
+    runStep.push(segVec[3 * s], segVec[3 * s + 1], segVec[3 * s + 2]);
+  }
   return {
     nodeCount,
     nodeXyz: Float64Array.from(xyz),
@@ -57,6 +73,9 @@ export function createFarFieldPlan(mesh: Mesh, re: Float64Array, im: Float64Arra
     planarXy,
     phaseRe: new Float64Array(nodeCount),
     phaseIm: new Float64Array(nodeCount),
+    runFirstNode: Int32Array.from(runFirst),
+    runNodeCount: Int32Array.from(runCount),
+    runStep: Float64Array.from(runStep),
   };
 }
 
@@ -70,10 +89,22 @@ export function farFieldAt(plan: FarFieldPlan, thetaRad: number, phiRad: number,
   const ux = st * cp, uy = st * sp, uz = ct;
   const k = plan.kRadPerM;
   const { nodeXyz, phaseRe, phaseIm } = plan;
-  for (let i = 0; i < plan.nodeCount; i++) {
-    const psi = k * (ux * nodeXyz[3 * i] + uy * nodeXyz[3 * i + 1] + uz * nodeXyz[3 * i + 2]);
-    phaseRe[i] = Math.cos(psi);
-    phaseIm[i] = Math.sin(psi);
+  const { runFirstNode, runNodeCount, runStep } = plan;
+  for (let r = 0; r < runFirstNode.length; r++) {
+    const i0 = runFirstNode[r];
+    const psi = k * (ux * nodeXyz[3 * i0] + uy * nodeXyz[3 * i0 + 1] + uz * nodeXyz[3 * i0 + 2]);
+    const step = k * (ux * runStep[3 * r] + uy * runStep[3 * r + 1] + uz * runStep[3 * r + 2]);
+    const wr = Math.cos(step), wi = Math.sin(step);
+    let er = Math.cos(psi), ei = Math.sin(psi);
+    phaseRe[i0] = er;
+    phaseIm[i0] = ei;
+    for (let i = i0 + 1; i < i0 + runNodeCount[r]; i++) { // E_{i+1} = E_i·w
+      const t = er * wr - ei * wi;
+      ei = er * wi + ei * wr;
+      er = t;
+      phaseRe[i] = er;
+      phaseIm[i] = ei;
+    }
   }
   let nxr = 0, nxi = 0, nyr = 0, nyi = 0, nzr = 0, nzi = 0;
   const { segVec, segCurrent, segStartNode, segEndNode } = plan;

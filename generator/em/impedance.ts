@@ -17,49 +17,95 @@ export function fillImpedance(
   rules: KernelRules = KERNEL_RULES,
 ): ComplexMatrix {
   const z = createComplexMatrix(mesh.unknowns);
-  const n = mesh.unknowns;
-  const c = ETA0_OHM / (4 * Math.PI); // jη/(4π) applied at the end
   const out = new Float64Array(8);
-  const { dir, basisAtStart, basisAtEnd } = mesh;
-  const mm = [0, 0];
+  const block = new Float64Array(4 * BLOCK_STRIDE);
   for (let p = 0; p < mesh.segmentCount; p++) {
-    const pa = basisAtStart[p], pb = basisAtEnd[p];
-    if (pa < 0 && pb < 0) continue;
+    if (mesh.basisAtStart[p] < 0 && mesh.basisAtEnd[p] < 0) continue;
     for (let q = p; q < mesh.segmentCount; q++) {
-      const qa = basisAtStart[q], qb = basisAtEnd[q];
-      if (qa < 0 && qb < 0) continue;
-      pairIntegrals(mesh, p, q, kRadPerM, rules, out);
-      const dot = dir[3 * p] * dir[3 * q] + dir[3 * p + 1] * dir[3 * q + 1] + dir[3 * p + 2] * dir[3 * q + 2];
-      // halves on p: (basis, weight kind) — falling 1−t for pa, rising t for pb
-      for (let hp = 0; hp < 2; hp++) {
-        const m = hp === 0 ? pa : pb;
-        if (m < 0) continue;
-        for (let hq = 0; hq < 2; hq++) {
-          const nn = hq === 0 ? qa : qb;
-          if (nn < 0) continue;
-          // ∬ fp fq g with f = 1 − t (h = 0) or t (h = 1): combine K00, K10, K01, K11
-          let vr: number, vi: number;
-          if (hp === 1 && hq === 1) { vr = out[6]; vi = out[7]; }
-          else if (hp === 1) { vr = out[2] - out[6]; vi = out[3] - out[7]; }
-          else if (hq === 1) { vr = out[4] - out[6]; vi = out[5] - out[7]; }
-          else { vr = out[0] - out[2] - out[4] + out[6]; vi = out[1] - out[3] - out[5] + out[7]; }
-          const sign = hp === hq ? 1 : -1; // σp σq Lp Lq
-          // bracket B = k·dot·V − sign·K00/(k·Lp·Lq); Z += jc·B → re −= c·B_im, im += c·B_re
-          const lpq = mesh.lengthM[p] * mesh.lengthM[q];
-          const br = kRadPerM * dot * vr - (sign * out[0]) / (kRadPerM * lpq);
-          const bi = kRadPerM * dot * vi - (sign * out[1]) / (kRadPerM * lpq);
-          mm[0] = m * n + nn;
-          mm[1] = nn * n + m;
-          const copies = p === q ? 1 : 2;
-          for (let r = 0; r < copies; r++) {
-            z.re[mm[r]] -= c * bi;
-            z.im[mm[r]] += c * br;
-          }
-        }
-      }
+      if (mesh.basisAtStart[q] < 0 && mesh.basisAtEnd[q] < 0) continue;
+      const count = pairBlock(mesh, p, q, kRadPerM, rules, out, block);
+      scatterBlock(z, block, count, p === q, null);
     }
   }
   return z;
+}
+
+/** Entries of a pair block: [m, n, Z_re, Z_im] per basis pair. */
+export const BLOCK_STRIDE = 4;
+
+/**
+ * The up-to-4 matrix contributions of the segment pair (p, q), written as [m, n, re, im] rows into
+ * `block`; returns the count. Extra pair terms (e.g. image coupling) can be added per pair the same way.
+ */
+export function pairBlock(
+  mesh: Mesh,
+  p: number,
+  q: number,
+  kRadPerM: number,
+  rules: KernelRules,
+  out: Float64Array,
+  block: Float64Array,
+): number {
+  const c = ETA0_OHM / (4 * Math.PI); // jη/(4π) applied at the end
+  const { dir, basisAtStart, basisAtEnd } = mesh;
+  const pa = basisAtStart[p], pb = basisAtEnd[p];
+  const qa = basisAtStart[q], qb = basisAtEnd[q];
+  pairIntegrals(mesh, p, q, kRadPerM, rules, out);
+  const dot = dir[3 * p] * dir[3 * q] + dir[3 * p + 1] * dir[3 * q + 1] + dir[3 * p + 2] * dir[3 * q + 2];
+  const lpq = mesh.lengthM[p] * mesh.lengthM[q];
+  let count = 0;
+  // halves on p: (basis, weight kind) — falling 1−t for pa, rising t for pb
+  for (let hp = 0; hp < 2; hp++) {
+    const m = hp === 0 ? pa : pb;
+    if (m < 0) continue;
+    for (let hq = 0; hq < 2; hq++) {
+      const nn = hq === 0 ? qa : qb;
+      if (nn < 0) continue;
+      // ∬ fp fq g with f = 1 − t (h = 0) or t (h = 1): combine K00, K10, K01, K11
+      let vr: number, vi: number;
+      if (hp === 1 && hq === 1) { vr = out[6]; vi = out[7]; }
+      else if (hp === 1) { vr = out[2] - out[6]; vi = out[3] - out[7]; }
+      else if (hq === 1) { vr = out[4] - out[6]; vi = out[5] - out[7]; }
+      else { vr = out[0] - out[2] - out[4] + out[6]; vi = out[1] - out[3] - out[5] + out[7]; }
+      const sign = hp === hq ? 1 : -1; // σp σq Lp Lq
+      // bracket B = k·dot·V − sign·K00/(k·Lp·Lq); Z += jc·B → re −= c·B_im, im += c·B_re
+      const br = kRadPerM * dot * vr - (sign * out[0]) / (kRadPerM * lpq);
+      const bi = kRadPerM * dot * vi - (sign * out[1]) / (kRadPerM * lpq);
+      const o = BLOCK_STRIDE * count++;
+      block[o] = m; block[o + 1] = nn; block[o + 2] = -c * bi; block[o + 3] = c * br;
+    }
+  }
+  return count;
+}
+
+/**
+ * Adds a pair block to Z at (m, n) and, for two different segments, at (n, m) (Z is symmetric).
+ * With `mirror`, adds σ_m σ_n times the same value at (P(m), P(n)) instead (the mirrored pair).
+ */
+export function scatterBlock(
+  z: ComplexMatrix,
+  block: Float64Array,
+  count: number,
+  selfPair: boolean,
+  mirror: { basis: Int32Array; sign: Int8Array } | null,
+): void {
+  const n = z.n;
+  for (let e = 0; e < count; e++) {
+    const o = BLOCK_STRIDE * e;
+    let m = block[o], nn = block[o + 1];
+    let vr = block[o + 2], vi = block[o + 3];
+    if (mirror) {
+      const s = mirror.sign[m] * mirror.sign[nn];
+      m = mirror.basis[m]; nn = mirror.basis[nn];
+      vr *= s; vi *= s;
+    }
+    z.re[m * n + nn] += vr;
+    z.im[m * n + nn] += vi;
+    if (!selfPair) {
+      z.re[nn * n + m] += vr;
+      z.im[nn * n + m] += vi;
+    }
+  }
 }
 
 /** Surface impedance per unit length of a round wire, Zs = (1+j)/(2πa)·√(ωμ0/2σ) (Ω/m, re = im). */

@@ -8,7 +8,7 @@
 //   (e^{−jkR} − 1)/R  (smooth: Gauss–Legendre)  +  1/R  (inner integral in closed form),
 //   ∫_0^L ds/√((s−s0)²+ρ²) = asinh((L−s0)/ρ) + asinh(s0/ρ),
 //   ∫_0^L s ds/√((s−s0)²+ρ²) = √((L−s0)²+ρ²) − √(s0²+ρ²) + s0·∫_0^L ds/√(…),
-// with the outer integral by Gauss–Legendre.
+// with the outer integral by Gauss–Legendre, taken as the mean of p-outer and q-outer.
 import { gaussLegendre01, type GaussRule } from "./gaussLegendre.js";
 import type { Mesh } from "./mesh.js";
 
@@ -26,6 +26,25 @@ export function createKernelRules(): KernelRules {
 
 /** The rules every solve uses: a table of constants, computed once rather than per matrix fill. */
 export const KERNEL_RULES: Readonly<KernelRules> = createKernelRules();
+
+/** Centre distance / longer length below which a pair is "near" (static part in closed form). */
+export const NEAR_RATIO = 2.1;
+const RATIO_TIE = 1e-9;
+
+/**
+ * True when pairIntegrals treats (p, q) as near. Near pairs integrate p by Gauss–Legendre and q in
+ * closed form, so (p, q) and (q, p) differ at the quadrature-error level; far pairs are a tensor
+ * rule, the same either way up to rounding.
+ */
+export function isNearPair(mesh: Mesh, p: number, q: number): boolean {
+  const { start, dir, lengthM } = mesh;
+  let d2 = 0;
+  for (let c = 0; c < 3; c++) {
+    const d = start[3 * p + c] + 0.5 * dir[3 * p + c] * lengthM[p] - start[3 * q + c] - 0.5 * dir[3 * q + c] * lengthM[q];
+    d2 += d * d;
+  }
+  return Math.sqrt(d2) / Math.max(lengthM[p], lengthM[q]) < NEAR_RATIO;
+}
 
 /** Out: [K00re, K00im, K10re, K10im, K01re, K01im, K11re, K11im] for segments p, q. */
 export function pairIntegrals(
@@ -50,11 +69,21 @@ export function pairIntegrals(
   const cz = pz + 0.5 * upz - qz - 0.5 * uqz;
   const ratio = Math.sqrt(cx * cx + cy * cy + cz * cz) / Math.max(lp, lq);
   out.fill(0);
-  if (ratio < 2.1) {
+  if (ratio < NEAR_RATIO) {
+    // the closed-form inner integral makes the two roles differ at the quadrature-error level: use
+    // the mean of both orders so Z_mn = Z_nm and mirror images agree whatever the segment numbering
     nearPair(px, py, pz, upx, upy, upz, qx, qy, qz, uqx, uqy, uqz, lp, lq, a2, kRadPerM, rules, out);
+    const swapped = new Float64Array(8);
+    nearPair(qx, qy, qz, uqx, uqy, uqz, px, py, pz, upx, upy, upz, lq, lp, a2, kRadPerM, rules, swapped);
+    for (let i = 0; i < 8; i++) {
+      const j = i === 2 || i === 3 ? i + 2 : i === 4 || i === 5 ? i - 2 : i; // K10(q,p) = K01(p,q)
+      out[i] = 0.5 * (out[i] + swapped[j]);
+    }
     return;
   }
-  const rule = rules.far[ratio < 5 ? 4 : ratio < 10 ? 3 : 2];
+  // segments n apart on a straight piece sit at ratio n exactly: the small margin keeps such ties on
+  // the finer rule whatever the rounding, so mirror-image pairs get the same rule
+  const rule = rules.far[ratio < 5 + RATIO_TIE ? 4 : ratio < 10 + RATIO_TIE ? 3 : 2];
   smoothPart(px, py, pz, upx, upy, upz, qx, qy, qz, uqx, uqy, uqz, a2, kRadPerM, rule, false, out);
   const scale = lp * lq;
   for (let i = 0; i < 8; i++) out[i] *= scale;
@@ -107,7 +136,9 @@ function nearPair(
     const ti = t[i];
     const dx = px + ti * upx - qx, dy = py + ti * upy - qy, dz = pz + ti * upz - qz;
     const s0 = dx * ex + dy * ey + dz * ez;
-    const rho2 = Math.max(dx * dx + dy * dy + dz * dz - s0 * s0, 0) + a2;
+    // ρ⊥² = |d × ê|², not |d|² − s0²: no cancellation for collinear neighbours (ρ⊥ ≈ 0)
+    const cx = dy * ez - dz * ey, cy = dz * ex - dx * ez, cz = dx * ey - dy * ex;
+    const rho2 = cx * cx + cy * cy + cz * cz + a2;
     const rho = Math.sqrt(rho2);
     const f0 = Math.asinh((lq - s0) / rho) + Math.asinh(s0 / rho); // ∫ ds / R
     const f1 = Math.sqrt((lq - s0) ** 2 + rho2) - Math.sqrt(s0 * s0 + rho2) + s0 * f0; // ∫ s ds / R

@@ -4,9 +4,10 @@
 //   G = 4πU_max / P_in,  D = 4πU_max / P_rad,  e = P_rad / P_in   (IEEE Std 145-2013 definitions).
 // Energy balance: |∫U dΩ − P_rad| / P_rad, a check that the matrix and the far field agree.
 import { CONDUCTIVITY_S_PER_M, toDb, wavenumberRadPerM } from "../units.js";
-import { solveComplex } from "./complexLu.js";
 import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
 import { checkMesh } from "./geometryChecks.js";
+import { fillImpedanceMirror, solveImpedanceSystem } from "./mirrorSolve.js";
+import { detectMirrorSymmetry } from "./mirrorSymmetry.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
 import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
@@ -27,6 +28,8 @@ export interface SolveOptions {
   rules?: KernelRules;
   /** Over ground only: search the peak within these elevations (degrees), e.g. [5, 25]. */
   elevationWindowDeg?: [number, number];
+  /** Use the mirror-symmetric fill and even-mode solve when the mesh allows (default true). */
+  symmetry?: boolean;
 }
 
 export interface Solution {
@@ -73,7 +76,9 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const mesh = withGroundedEnds(buildMesh(shape, options.segmentsPerWavelength), shape); // no-op in free space
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
-  const z = fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
+  const sym = options.symmetry === false ? null : detectMirrorSymmetry(mesh); // dispatch: mirrorSolve.ts
+  const z = sym ? fillImpedanceMirror(mesh, k, sym, options.rules) : fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
+  // the image in z = 0 commutes with the y–z mirror, so the even-mode solve below still holds
   if (shape.ground) addImageCoupling(z, mesh, k, imageFactor(shape.ground, shape.frequencyHz), options.rules ?? KERNEL_RULES);
   const sigma = conductivityOf(shape.conductor);
   const rPerM = new Float64Array(mesh.segmentCount);
@@ -84,7 +89,7 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const bRe = new Float64Array(mesh.unknowns);
   const bIm = new Float64Array(mesh.unknowns);
   bRe[mesh.feedBasis] = 1; // 1 V delta gap
-  const { re, im } = solveComplex(z, bRe, bIm, true); // z is ours alone: factor it in place
+  const { re, im } = solveImpedanceSystem(z, sym, bRe, bIm); // even mode, LDLᵀ, or LU (mirrorSolve.ts)
   const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
   const i2 = ir * ir + ii * ii;
   return {

@@ -3,7 +3,8 @@
 // (Fig. 6 algorithm, Table 1 defaults with active negative weights, App. B.3 termination).
 // Stopping rule (see cmaEsStop.ts): stop() ≠ [] when e.g. evaluations + λ > maxEvaluations, or
 // max(range of best f over 10 + ⌈30n/λ⌉ gens, range of f in last gen) < tolFun, or
-// max_i max(σ√C_ii, σ|p_c,i|) < tolX, or cond(C) > 1e14, or noEffectAxis/Coord.
+// max_i max(σ√C_ii, σ|p_c,i|) < tolX, or cond(C) > 1e14, or noEffectAxis/Coord, or range of best f
+// over H gens < tolHistFun, or stagnation of the best and median f (App. B.3).
 //
 // Bounds: the distribution N(m, σ²C) stays unbounded; every sample x is mapped into the box by the
 // periodic reflection of boxBounds.ts and the caller evaluates only that mapped point. Chosen over
@@ -14,7 +15,7 @@
 import { checkBox, checkStartInBox, reflectIntoBox, wrapIntoPeriod, type Box } from "./boxBounds.js";
 import { checkInteger, checkNonNegative, checkPositive, checkSeed } from "./checkOptions.js";
 import { cmaEsParameters, defaultPopulationSize, type CmaEsParameters } from "./cmaEsParameters.js";
-import { cmaEsStopReasons, historyWindow } from "./cmaEsStop.js";
+import { cmaEsStopReasons, historyWindow, STAGNATION_HISTORY_CAP } from "./cmaEsStop.js";
 import { eigenSymmetric } from "./eigenSymmetric.js";
 import { createRng, type Rng } from "./rng.js";
 import { rankKey, type StopReason } from "./types.js";
@@ -35,6 +36,8 @@ export interface CmaEsOptions {
   tolFun?: number;
   /** Default 1e-12·σ0. */
   tolX?: number;
+  /** Range of the best f over the last 10 + ⌈30n/λ⌉ generations; default 0 (rule off). */
+  tolHistFun?: number;
   /** Default 1e14. */
   conditionLimit?: number;
 }
@@ -49,6 +52,7 @@ export interface CmaEsState {
   maxEvaluations: number;
   tolFun: number;
   tolX: number;
+  tolHistFun: number;
   conditionLimit: number;
   sigma0: number;
   sigma: number;
@@ -62,6 +66,9 @@ export interface CmaEsState {
   pc: number[];
   bestHistory: number[];
   lastGenerationRange: number;
+  /** Best and median f per generation for the stagnation rule (last ≤ 20000 generations). */
+  stagnationBest: number[];
+  stagnationMedian: number[];
   bestX: number[];
   bestF: number;
   /** Samples of the outstanding ask(): z ~ N(0, I), y = B·D·z, mapped candidates. */
@@ -112,6 +119,7 @@ export function initialCmaEsState(options: CmaEsOptions): CmaEsState {
   const { n, box, x0, sigma0, lambda, seed, maxEvaluations } = checkStartOptions(name, options);
   const tolFun = checkNonNegative(name, "tolFun", options.tolFun ?? 1e-12);
   const tolX = checkNonNegative(name, "tolX", options.tolX ?? 1e-12 * sigma0);
+  const tolHistFun = checkNonNegative(name, "tolHistFun", options.tolHistFun ?? 0);
   const conditionLimit = checkPositive(name, "conditionLimit", options.conditionLimit ?? 1e14);
   const identity = (): number[][] => x0.map((_, i) => x0.map((_, j) => (i === j ? 1 : 0)));
   return {
@@ -123,6 +131,7 @@ export function initialCmaEsState(options: CmaEsOptions): CmaEsState {
     maxEvaluations,
     tolFun,
     tolX,
+    tolHistFun,
     conditionLimit,
     sigma0,
     sigma: sigma0,
@@ -135,6 +144,8 @@ export function initialCmaEsState(options: CmaEsOptions): CmaEsState {
     pc: new Array<number>(n).fill(0),
     bestHistory: [],
     lastGenerationRange: Infinity,
+    stagnationBest: [],
+    stagnationMedian: [],
     bestX: [...x0],
     bestF: Infinity,
     pending: null,
@@ -193,6 +204,12 @@ export function tellCmaEs(
   if (Number.isNaN(s.lastGenerationRange)) s.lastGenerationRange = Infinity;
   s.bestHistory.push(genBest);
   if (s.bestHistory.length > historyWindow(n, lambda)) s.bestHistory.shift();
+  s.stagnationBest.push(genBest);
+  s.stagnationMedian.push(rankKey(scores[order[Math.floor(lambda / 2)]]));
+  if (s.stagnationBest.length > STAGNATION_HISTORY_CAP) {
+    s.stagnationBest.shift();
+    s.stagnationMedian.shift();
+  }
   if (genBest < s.bestF) {
     s.bestF = genBest;
     s.bestX = [...pending.candidates[order[0]]];

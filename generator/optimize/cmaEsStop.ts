@@ -9,6 +9,10 @@
 //   conditionCov:   max_i d_i² / min_i d_i² > conditionLimit (1e14)
 //   noEffectAxis:   m + 0.1σ d_k b_k = m in floating point, k = g mod n
 //   noEffectCoord:  m_i + 0.2σ√C_ii = m_i for some i
+//   tolHistFun:     range of best f over the last H gens < tolHistFun (off when tolHistFun = 0)
+//   stagnation:     with L = min(20000, max(120 + 30n/λ, 0.2 g)) generations of best and median f
+//                   (checked once g ≥ 120 + 30n/λ): in both, the median of the most recent 30 % is
+//                   not below the median of the oldest 30 %
 
 import type { StopReason } from "./types.js";
 
@@ -20,6 +24,8 @@ export interface CmaEsStopInputs {
   maxEvaluations: number;
   tolFun: number;
   tolX: number;
+  /** 0 turns the rule off. */
+  tolHistFun: number;
   conditionLimit: number;
   sigma: number;
   sigma0: number;
@@ -36,6 +42,41 @@ export interface CmaEsStopInputs {
   bestHistory: readonly number[];
   /** max f − min f in the last generation; +Infinity if any score was non-finite. */
   lastGenerationRange: number;
+  /** Best and median f of every generation (the last up to 20000), oldest first. */
+  stagnationBest: readonly number[];
+  stagnationMedian: readonly number[];
+}
+
+/** The tutorial's cap on the stagnation history, in generations. */
+export const STAGNATION_HISTORY_CAP = 20000;
+
+/** 120 + 30n/λ: the shortest stagnation window, in generations. */
+export function stagnationMinimum(n: number, lambda: number): number {
+  return 120 + Math.ceil((30 * n) / lambda);
+}
+
+const medianOf = (xs: readonly number[]): number => {
+  const s = [...xs].sort((a, b) => a - b);
+  const h = s.length >> 1;
+  return s.length % 2 === 1 ? s[h] : 0.5 * (s[h - 1] + s[h]);
+};
+
+/**
+ * Stagnation test on the last L values of each history: returns how much the recent-30 % median
+ * improved on the old-30 % median (the larger over both histories, so ≤ 0 means neither improved:
+ * stagnant), or null while the histories are too short.
+ */
+export function stagnationProgress(s: Pick<CmaEsStopInputs, "n" | "lambda" | "generation" | "stagnationBest" | "stagnationMedian">): number | null {
+  const minimum = stagnationMinimum(s.n, s.lambda);
+  if (s.stagnationBest.length < minimum) return null;
+  const length = Math.min(STAGNATION_HISTORY_CAP, Math.max(minimum, Math.ceil(0.2 * s.generation)), s.stagnationBest.length);
+  const part = Math.max(1, Math.floor(0.3 * length));
+  let progress = -Infinity;
+  for (const h of [s.stagnationBest, s.stagnationMedian]) {
+    const window = h.slice(h.length - length);
+    progress = Math.max(progress, medianOf(window.slice(0, part)) - medianOf(window.slice(length - part)));
+  }
+  return Number.isNaN(progress) ? 0 : progress; // ∞ − ∞: no finite score in either part, stagnant
 }
 
 /** H = 10 + ⌈30n/λ⌉, the history window of the f-based criteria. */
@@ -54,7 +95,9 @@ export function cmaEsStopReasons(s: CmaEsStopInputs): StopReason[] {
   const historyRange = Math.max(...window) - Math.min(...window); // NaN-free: entries are finite or +∞
   const funRange = Math.max(Number.isNaN(historyRange) ? Infinity : historyRange, s.lastGenerationRange);
   if (funRange < s.tolFun) reasons.push({ reason: "tolFun", value: funRange });
-  if (window.length >= historyWindow(s.n, s.lambda) && historyRange === 0) {
+  const historyFull = window.length >= historyWindow(s.n, s.lambda);
+  if (historyFull && historyRange < s.tolHistFun) reasons.push({ reason: "tolHistFun", value: historyRange });
+  if (historyFull && historyRange === 0) {
     reasons.push({ reason: "equalFunValues", value: historyRange });
   }
 
@@ -86,5 +129,7 @@ export function cmaEsStopReasons(s: CmaEsStopInputs): StopReason[] {
       break;
     }
   }
+  const progress = stagnationProgress(s);
+  if (progress !== null && !(progress > 0)) reasons.push({ reason: "stagnation", value: progress });
   return reasons;
 }

@@ -3,7 +3,11 @@
 // IEEE CEC 2005. Restarts begin at a point drawn uniformly in the box when it is finite (else at
 // x0), with the same σ0 and a fresh seed drawn from the driver's stream.
 // Stopping rule: stop when f_best ≤ target, or Σ evaluations + λ_k > maxEvaluations, or a run
-// stops (cmaEsStop.ts) with k = maxRestarts; otherwise restart with λ_{k+1} = 2λ_k.
+// stops (cmaEsStop.ts) with k = maxRestarts, or (restartsStale) R = staleRestarts restarts in a row
+// each lowered the best-so-far by less than ε = minRestartGain, i.e. f_best(before run k) −
+// f_best(after run k) < ε for the last R runs k ≥ 1 (off when staleRestarts is unset); otherwise
+// restart with λ_{k+1} = 2λ_k. The restart rule is the usual practical reading of IPOP's budget: once
+// larger populations stop finding better basins, further restarts only spend evaluations.
 
 import { checkInteger, checkNonNegative, checkTarget } from "./checkOptions.js";
 import { checkStartOptions, createCmaEs, type CmaEs, type CmaEsOptions } from "./cmaEs.js";
@@ -19,6 +23,10 @@ export interface IpopOptions extends Omit<CmaEsOptions, "conditionLimit"> {
   maxRestarts?: number;
   /** Stop as soon as f ≤ target; default −Infinity (never). */
   target?: number;
+  /** R: stop after this many restarts in a row gained less than minRestartGain; default off. */
+  staleRestarts?: number;
+  /** ε for staleRestarts (same unit as f); default 0. */
+  minRestartGain?: number;
 }
 
 export interface IpopRun {
@@ -26,6 +34,8 @@ export interface IpopRun {
   evaluations: number;
   bestF: number;
   stopReasons: StopReason[];
+  /** How much this run lowered the best-so-far of the runs before it (null for the first run). */
+  gain: number | null;
 }
 
 export interface IpopResult extends OptimizeResult {
@@ -51,6 +61,12 @@ interface IpopState {
   maxEvaluations: number;
   maxRestarts: number;
   target: number;
+  staleRestarts: number;
+  minRestartGain: number;
+  /** Restarts in a row that gained less than minRestartGain. */
+  staleCount: number;
+  /** Best-so-far when the current run began. */
+  runStartBestF: number;
   es: CmaEs;
   runStartEvaluations: number;
   evaluations: number;
@@ -67,6 +83,7 @@ export function createIpop(options: IpopOptions): Ipop {
   const { box, x0, lambda: lambda0, seed, maxEvaluations } = checkStartOptions(name, options);
   if (options.tolFun !== undefined) checkNonNegative(name, "tolFun", options.tolFun);
   if (options.tolX !== undefined) checkNonNegative(name, "tolX", options.tolX);
+  if (options.tolHistFun !== undefined) checkNonNegative(name, "tolHistFun", options.tolHistFun);
   const rng = createRng(seed);
   const runOptions = { ...options, lowerBounds: box.lower, upperBounds: box.upper, populationSize: lambda0 };
   const s: IpopState = {
@@ -76,6 +93,10 @@ export function createIpop(options: IpopOptions): Ipop {
     maxEvaluations,
     maxRestarts: checkInteger(name, "maxRestarts", options.maxRestarts ?? 9, 0),
     target: checkTarget(name, options.target ?? -Infinity),
+    staleRestarts: options.staleRestarts === undefined ? Infinity : checkInteger(name, "staleRestarts", options.staleRestarts, 1),
+    minRestartGain: checkNonNegative(name, "minRestartGain", options.minRestartGain ?? 0),
+    staleCount: 0,
+    runStartBestF: Infinity,
     es: startRun(runOptions, x0, lambda0, rng, maxEvaluations),
     runStartEvaluations: 0,
     evaluations: 0,
@@ -138,6 +159,7 @@ function startRun(options: IpopOptions, x0: number[], lambda: number, rng: Rng, 
     maxEvaluations: budget,
     tolFun: options.tolFun,
     tolX: options.tolX,
+    tolHistFun: options.tolHistFun,
   });
 }
 
@@ -159,9 +181,12 @@ function tellIpop(s: IpopState, candidates: readonly (readonly number[])[], scor
   }
   const runReasons = s.es.stop();
   if (runReasons.length === 0) return;
-  finishRun(s, runReasons);
+  const gain = finishRun(s, runReasons);
+  if (s.restarts > 0) s.staleCount = gain < s.minRestartGain ? s.staleCount + 1 : 0;
   if (runReasons.some((r) => r.reason === "maxEvaluations")) {
     finish(s, [{ reason: "maxEvaluations", value: s.evaluations }]); // value: total, not per run
+  } else if (s.staleCount >= s.staleRestarts) {
+    finish(s, [...runReasons, { reason: "restartsStale", value: gain }]); // value: the last run's gain
   } else if (s.restarts >= s.maxRestarts) {
     finish(s, [...runReasons, { reason: "maxRestarts", value: s.restarts }]);
   } else {
@@ -169,6 +194,7 @@ function tellIpop(s: IpopState, candidates: readonly (readonly number[])[], scor
     const lambda = s.lambda0 * 2 ** s.restarts; // λ_k = 2^k λ_0
     const x0 = restartPoint(s);
     s.runStartEvaluations = s.evaluations;
+    s.runStartBestF = s.bestF;
     s.es = startRun(s.options, x0, lambda, s.rng, s.maxEvaluations - s.evaluations);
     checkBudget(s);
   }
@@ -188,13 +214,18 @@ function checkBudget(s: IpopState): void {
   if (s.es.stop().length > 0) finish(s, [{ reason: "maxEvaluations", value: s.evaluations }]);
 }
 
-function finishRun(s: IpopState, reasons: StopReason[]): void {
+/** Records the run that just ended; returns its gain over the best-so-far before it. */
+function finishRun(s: IpopState, reasons: StopReason[]): number {
+  const bestF = s.es.best().f;
+  const gain = s.runStartBestF === Infinity ? Infinity : Math.max(0, s.runStartBestF - bestF);
   s.runs.push({
     populationSize: s.es.state.params.lambda,
     evaluations: s.es.state.evaluations,
-    bestF: s.es.best().f,
+    bestF,
     stopReasons: reasons,
+    gain: s.runs.length === 0 ? null : gain,
   });
+  return gain;
 }
 
 function finish(s: IpopState, reasons: StopReason[]): void {

@@ -84,4 +84,17 @@ describe("bent-arm designs of a 1.5λ wire", () => {
     expect(o.message).toMatch(/no shape met every constraint/);
     expect(evaluate(o.x, r, [], 2).score).toBeGreaterThan(0);
   });
+
+  it("skips a polish whose start is far from feasible and says so (a centre-fed 1λ wire: kilohms, common practice)", () => {
+    const r = parseDesignRequest({ frequencyHz: C, lengthWl: 1, piecesPerArm: 1, wireDiameterM: 2e-3, conductor: "perfect", variant: "direct-feed" });
+    const start = [Math.PI / 2]; // arms straight out: a centre-fed full-wave wire, Z_in of kilohms
+    const o = designBentArm(r, { start, skipPolishAboveSwr: 4 });
+    expect(o.status).toBe("infeasible");
+    expect(o.evaluations).toBe(1);
+    expect(o.stopReasons).toEqual([{ reason: "startFarFromFeasible", value: o.evaluation.maxSwr }]);
+    expect(o.evaluation.maxSwr!).toBeGreaterThan(4);
+    expect(o.message).toMatch(/polish skipped/);
+    // without the threshold the same call runs the polish
+    expect(designBentArm(r, { start }).evaluations).toBeGreaterThan(10);
+  });
 });
