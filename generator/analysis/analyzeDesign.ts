@@ -1,7 +1,11 @@
 // Everything a builder needs to know about one shape, in one pure function: the design-frequency
 // figures, a band sweep, a feed-match suggestion, a tolerance study, pattern figures and cuts, and
 // the trust figures. The CLI's `analyze --band-mhz` and the catalog both call this.
-import { solveShape, type Shape } from "../em/index.js";
+// Mesh: converged.ts refines from the shape's segments per wavelength until gain and impedance
+// settle at the design frequency and both band edges; the sweep, the pattern and the match use that
+// mesh. The tolerance Monte Carlo stays on the starting mesh (64 solves of the finest mesh would
+// cost too much) and compares its samples with that mesh's own nominal gain.
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { DEG_PER_RAD } from "../units.js";
 import { suggestMatch, type MatchSuggestion } from "./feedMatch.js";
@@ -9,7 +13,8 @@ import { describeLobe, type LobeWords } from "./lobeWords.js";
 import {
   cutGainsDbi, frontToBackDb, gainGridDbi, halfPowerBeamwidthDeg, polarizationAt, principalCuts, type Polarization,
 } from "./patternFigures.js";
-import { bandSweep, type Sweep } from "./sweep.js";
+import { refineMesh, solveAt, uncertaintyOf, type SolveCache, type Uncertainty } from "./converged.js";
+import { bandSweep, sweepFrequencies, type Sweep } from "./sweep.js";
 import { DEFAULT_TOLERANCE, toleranceStudy, type ToleranceOptions, type ToleranceStudy } from "./tolerance.js";
 import { trustFigures, type TrustFigures } from "./trust.js";
 
@@ -21,6 +26,8 @@ export interface AnalysisOptions {
   bandHz: [number, number];
   lineImpedanceOhm: number;
   tolerance: Omit<ToleranceOptions, "lineImpedanceOhm">;
+  /** Fix this one mesh (no refinement), for comparisons. */
+  segmentsPerWavelength?: number;
 }
 
 export interface PatternFigures {
@@ -45,6 +52,9 @@ export interface Analysis {
     directivityDbi: number;
     radiationEfficiency: number;
     peakDirection: { thetaDeg: number; phiDeg: number };
+    /** Length of the feed gap the source is spread over (m). */
+    feedGapM: number;
+    uncertainty: Uncertainty;
   };
   sweep: Sweep;
   match: MatchSuggestion;
@@ -66,13 +76,24 @@ export function checkAnalysisOptions(frequencyHz: number, o: AnalysisOptions): v
   }
 }
 
-export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis {
+/** The band edges as the sweep computes them, checked by the mesh refinement with the design frequency. */
+export function bandCheckFrequencies(bandHz: [number, number]): number[] {
+  const inBand = sweepFrequencies(bandHz).filter((p) => p.inBand).map((p) => p.frequencyHz);
+  return [inBand[0], inBand[inBand.length - 1]];
+}
+
+/** `cache` may be shared with a caller that solves the same shape (the CLI's summary). */
+export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: SolveCache = new Map()): Analysis {
   checkAnalysisOptions(shape.frequencyHz, options);
-  const s = solveShape(shape, { energyBalance: true });
+  const refinement = refineMesh(shape, { fixedSegmentsPerWavelength: options.segmentsPerWavelength, checkFrequenciesHz: bandCheckFrequencies(options.bandHz) }, cache);
+  const { segmentsPerWavelength, feedGapM } = refinement;
+  const s = solveAt(shape, shape.frequencyHz, segmentsPerWavelength, feedGapM, cache);
+  const baseSpw = options.segmentsPerWavelength ?? shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
+  const base = solveAt(shape, shape.frequencyHz, baseSpw, feedGapM, cache);
   const { theta, phi } = s.peakDirectionRad;
   const cuts = principalCuts(theta, phi);
   const polarization = polarizationAt(s.farField, theta, phi);
-  const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm);
+  const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm, { segmentsPerWavelength, feedGapM, cache });
   return {
     design: {
       frequencyHz: shape.frequencyHz,
@@ -82,10 +103,12 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
       directivityDbi: s.peakDirectivityDbi,
       radiationEfficiency: s.radiationEfficiency,
       peakDirection: { thetaDeg: theta * DEG_PER_RAD, phiDeg: phi * DEG_PER_RAD },
+      feedGapM,
+      uncertainty: uncertaintyOf(refinement),
     },
     sweep,
     match: suggestMatch(sweep, shape.frequencyHz, s.inputImpedanceOhm),
-    tolerance: toleranceStudy(shape, s.peakGainDbi, { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm }),
+    tolerance: toleranceStudy({ ...shape, segmentsPerWavelength: baseSpw }, base.peakGainDbi, { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm }),
     pattern: {
       beamwidthAlongThetaDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongTheta),
       beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongPhi),
@@ -96,7 +119,7 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
       cutAlongPhiDbi: cutGainsDbi(s.farField, cuts.alongPhi, s.inputPowerW, CUT_STEP_DEG),
       gridDbi: gainGridDbi(s.farField, s.inputPowerW, GRID_THETA_STEP_DEG, GRID_PHI_STEP_DEG),
     },
-    checks: trustFigures(shape, s),
+    checks: trustFigures(refinement, s),
     warnings: s.warnings,
   };
 }

@@ -1,9 +1,11 @@
 // Band sweep: at each frequency the input impedance, SWR on the line (Pozar §2.3), gain and
 // realized gain G_r = G·(1 − |Γ|²) (IEEE Std 145-2013, "realized gain"). Frequencies: `inBand`
 // evenly from the low to the high edge, plus `margin` points each side at the same spacing.
-import { DEFAULT_SEGMENTS_PER_WAVELENGTH, solveShape, type Shape } from "../em/index.js";
+// Every point uses the design frequency's mesh and feed gap (converged.ts picks the mesh).
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH, feedGapM, type Shape } from "../em/index.js";
 import { toDb } from "../units.js";
 import { abs } from "./complex.js";
+import { solveAt, type SolveCache } from "./converged.js";
 import { reflectionCoefficient, swr, swrSpanBelow, type SwrSpan } from "./swr.js";
 
 export interface SweepPoint {
@@ -33,12 +35,22 @@ export function sweepFrequencies(bandHz: [number, number], inBand = 11, margin =
   return out.filter((p) => p.frequencyHz > 0);
 }
 
-/** The mesh stays the one of the design frequency: segments per wavelength scale as f0/f. */
-export function bandSweep(shape: Shape, bandHz: [number, number], lineImpedanceOhm: number): Sweep {
-  const spw0 = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
+export interface SweepMesh {
+  /** Segments per wavelength at the design frequency (they scale as f0/f off it). */
+  segmentsPerWavelength: number;
+  feedGapM: number;
+  cache: SolveCache;
+}
+
+/** The mesh and the feed gap stay those of the design frequency at every point. */
+export function bandSweep(shape: Shape, bandHz: [number, number], lineImpedanceOhm: number, mesh?: SweepMesh): Sweep {
+  const m = mesh ?? {
+    segmentsPerWavelength: shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH,
+    feedGapM: feedGapM(shape.frequencyHz),
+    cache: new Map(),
+  };
   const points = sweepFrequencies(bandHz).map(({ frequencyHz, inBand }): SweepPoint => {
-    const segmentsPerWavelength = (spw0 * shape.frequencyHz) / frequencyHz;
-    const s = solveShape({ ...shape, frequencyHz }, { segmentsPerWavelength });
+    const s = solveAt(shape, frequencyHz, m.segmentsPerWavelength, m.feedGapM, m.cache);
     const gamma = abs(reflectionCoefficient(s.inputImpedanceOhm, lineImpedanceOhm));
     return {
       frequencyHz,

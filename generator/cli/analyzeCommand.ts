@@ -1,6 +1,6 @@
 // `analyze <shape.json>`: solves one shape and reports its figures, readable or as one JSON object.
-import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
-import { parseShape, solveShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { analyzeDesign, bandCheckFrequencies, checkAnalysisOptions, convergedSolution, DEFAULT_TOLERANCE, uncertaintyOf, type Refinement } from "../analysis/index.js";
+import { parseShape, SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
 import { analysisText } from "./analysisText.js";
 import { DEG_PER_RAD } from "../units.js";
 import { readInputFile } from "./errors.js";
@@ -16,7 +16,7 @@ export interface AnalyzeOptions {
 }
 
 /** The figures every analysis reports (the JSON contract of `analyze --json`). */
-export function solutionSummary(solution: Solution) {
+export function solutionSummary(solution: Solution, refinement?: Refinement) {
   return {
     solverVersion: SOLVER_VERSION,
     frequencyHz: solution.frequencyHz,
@@ -31,6 +31,8 @@ export function solutionSummary(solution: Solution) {
       phiDeg: solution.peakDirectionRad.phi * DEG_PER_RAD,
     },
     energyBalanceError: solution.energyBalanceError,
+    feedGapM: solution.feedGapM,
+    ...(refinement && { uncertainty: uncertaintyOf(refinement) }),
     warnings: solution.warnings,
   };
 }
@@ -48,6 +50,11 @@ export function summaryText(label: string, s: SolutionSummary): string {
     `  efficiency           ${fixed(100 * s.radiationEfficiency, 3)} %`,
     `  peak direction       θ ${fixed(s.peakDirection.thetaDeg, 1)}°, φ ${fixed(s.peakDirection.phiDeg, 1)}° (θ from +z, φ from +x toward +y)`,
   ];
+  if (s.uncertainty) {
+    const u = s.uncertainty;
+    lines.push(`  mesh                 ${u.segmentsPerWavelength} segments per wavelength; against ${u.comparedWithSegmentsPerWavelength} per wavelength gain moves ${fixed(u.gainDb, 3)} dB, impedance ${fixed(u.impedancePercent, 2)} %${u.converged ? "" : " (above the 0.01 dB / 1 % aim)"}`);
+  }
+  lines.push(`  feed gap             ${fixed(s.feedGapM * 1000, 1)} mm (the source voltage spread evenly over it)`);
   if (s.energyBalanceError !== null) lines.push(`  energy balance error ${s.energyBalanceError.toExponential(2)} (pattern integral vs. radiated power)`);
   for (const w of s.warnings) lines.push(`  warning: ${w}`);
   return lines.join("\n");
@@ -58,16 +65,21 @@ export async function loadShape(path: string): Promise<Shape> {
 }
 
 export async function analyzeCommand(path: string, options: AnalyzeOptions): Promise<void> {
-  const loaded = await loadShape(path);
-  const shape = options.segmentsPerWavelength ? { ...loaded, segmentsPerWavelength: options.segmentsPerWavelength } : loaded;
+  const shape = await loadShape(path);
+  // converged by default (analysis/converged.ts); --segments-per-wavelength fixes one mesh
+  const fixedSpw = options.segmentsPerWavelength;
   const analysisOptions = options.bandMhz && {
     bandHz: options.bandMhz,
     lineImpedanceOhm: options.lineOhm,
     tolerance: { ...DEFAULT_TOLERANCE, samples: options.toleranceSamples, seed: options.seed },
+    segmentsPerWavelength: fixedSpw,
   };
   if (analysisOptions) checkAnalysisOptions(shape.frequencyHz, analysisOptions);
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
-  const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;
+  const cache = new Map();
+  const checkFrequenciesHz = options.bandMhz ? bandCheckFrequencies(options.bandMhz) : [];
+  const { solution, refinement } = convergedSolution(shape, { fixedSegmentsPerWavelength: fixedSpw, checkFrequenciesHz }, cache);
+  const summary = solutionSummary(solution, refinement);
+  const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions, cache) : null;
   if (options.json) {
     const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks };
     process.stdout.write(`${JSON.stringify({ ...summary, ...extra })}\n`);

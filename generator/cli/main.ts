@@ -5,6 +5,7 @@ import { analyzeCommand } from "./analyzeCommand.js";
 import { runReportingErrors } from "./errors.js";
 import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCommand } from "./catalogCommands.js";
 import { designCommand } from "./designCommand.js";
+import { shapeCommand } from "./shapeCommand.js";
 import { bandMhz, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { VARIANTS } from "../design/request.js";
 
@@ -39,6 +40,13 @@ program
   .option("--json", "print one JSON object")
   .option("--out <file>", "write the winning shape as a shape file")
   .action((opts) => designCommand(opts));
+
+program
+  .command("shape")
+  .description("print a catalog design's shape file (the same bytes as the site's download)")
+  .argument("<entry-id>", "catalog entry id, e.g. 2m-1.5wl-k3-max-gain")
+  .option("--entries <dir>", "entries folder", DEFAULT_ENTRIES)
+  .action((id: string, opts) => shapeCommand(id, opts));
 
 program
   .command("generate")

@@ -1,11 +1,13 @@
 // One solve of a shape at its frequency: mesh → impedance matrix (+ conductor loss) → currents for
-// a 1 V delta-gap feed → input impedance, powers, peak gain, directivity and efficiency.
-//   Z_in = V / I_feed,  P_in = ½ Re(V I*),  P_loss = ½ Σ_s R'_s ∫|I(l)|² dl,  P_rad = P_in − P_loss,
+// a 1 V source spread over a finite gap at the feed (feedSource.ts) → input impedance, powers, peak
+// gain, directivity and efficiency.
+//   Z_in = V0 / Ī (Ī the gap-averaged current),  P_in = ½ Re(Σ V_m I_m*) = ½ Re(V0 Ī*),  P_loss = ½ Σ_s R'_s ∫|I(l)|² dl,  P_rad = P_in − P_loss,
 //   G = 4πU_max / P_in,  D = 4πU_max / P_rad,  e = P_rad / P_in   (IEEE Std 145-2013 definitions).
 // Energy balance: |∫U dΩ − P_rad| / P_rad, a check that the matrix and the far field agree.
 import { CONDUCTIVITY_S_PER_M, toDb, wavenumberRadPerM } from "../units.js";
 import { solveComplex } from "./complexLu.js";
 import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
+import { feedGapM as defaultFeedGapM, feedSegmentM, gapCurrent, gapExcitation } from "./feedSource.js";
 import { checkMesh } from "./geometryChecks.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
@@ -13,10 +15,12 @@ import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
 import { DEFAULT_PEAK_OPTIONS, findPeak, integratePattern, patternPointsFor, type PeakOptions } from "./pattern.js";
 import type { Conductor, Shape } from "./shapeFile.js";
 
-export const SOLVER_VERSION = "bentwire-em-1";
+export const SOLVER_VERSION = "bentwire-em-2";
 
 export interface SolveOptions {
   segmentsPerWavelength?: number;
+  /** Feed gap length (m); default λ/50 at the shape's frequency. A sweep passes the design's gap. */
+  feedGapM?: number;
   energyBalance?: boolean;
   peak?: PeakOptions;
   rules?: KernelRules;
@@ -26,6 +30,8 @@ export interface Solution {
   frequencyHz: number;
   unknowns: number;
   segments: number;
+  /** The feed gap the solve used (m). */
+  feedGapM: number;
   mesh: Mesh;
   currentRe: Float64Array;
   currentIm: Float64Array;
@@ -50,6 +56,8 @@ export function conductivityOf(conductor: Conductor): number {
 
 export interface FeedSolution {
   mesh: Mesh;
+  /** The feed gap the solve used (m). */
+  feedGapM: number;
   kRadPerM: number;
   currentRe: Float64Array;
   currentIm: Float64Array;
@@ -61,7 +69,9 @@ export interface FeedSolution {
 
 /** Currents and input impedance only: what a band sweep needs at frequencies off the design one. */
 export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolution {
-  const mesh = buildMesh(shape, options.segmentsPerWavelength);
+  const gapM = options.feedGapM ?? defaultFeedGapM(shape.frequencyHz);
+  const feedRadiusM = shape.wires[shape.feed.wire].radiusM ?? shape.wireRadiusM;
+  const mesh = buildMesh(shape, options.segmentsPerWavelength, feedSegmentM(gapM, feedRadiusM));
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
   const z = fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
@@ -71,19 +81,19 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
     for (let s = 0; s < mesh.segmentCount; s++) rPerM[s] = surfaceResistancePerM(shape.frequencyHz, mesh.radiusM[s], sigma);
     addConductorLoss(z, mesh, rPerM);
   }
-  const bRe = new Float64Array(mesh.unknowns);
+  const bRe = gapExcitation(mesh, gapM, shape.feed.wire); // V0 = 1 V over the gap
   const bIm = new Float64Array(mesh.unknowns);
-  bRe[mesh.feedBasis] = 1; // 1 V delta gap
   const { re, im } = solveComplex(z, bRe, bIm, true); // z is ours alone: factor it in place
-  const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
+  const { re: ir, im: ii } = gapCurrent(bRe, re, im);
   const i2 = ir * ir + ii * ii;
   return {
     mesh,
+    feedGapM: gapM,
     kRadPerM: k,
     currentRe: re,
     currentIm: im,
     inputImpedanceOhm: { re: ir / i2, im: -ii / i2 },
-    inputPowerW: 0.5 * ir, // ½ Re(V I*) with V = 1
+    inputPowerW: 0.5 * ir, // ½ Re(Σ V_m I_m*) = ½ Re Ī with V0 = 1 V
     lossPowerW: conductorLossW(mesh, re, im, rPerM),
     warnings,
   };
@@ -104,6 +114,7 @@ export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
     frequencyHz: shape.frequencyHz,
     unknowns: mesh.unknowns,
     segments: mesh.segmentCount,
+    feedGapM: feed.feedGapM,
     mesh,
     currentRe: re,
     currentIm: im,
