@@ -93,7 +93,16 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: Sol
   const { theta, phi } = s.peakDirectionRad;
   const cuts = principalCuts(theta, phi);
   const polarization = polarizationAt(s.farField, theta, phi);
-  const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm, { segmentsPerWavelength, feedGapM, cache });
+  // a refined mesh: sweep on the coarser mesh of the last doubling, corrected to the finest (sweep.ts)
+  const refined = options.segmentsPerWavelength === undefined;
+  const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm, refined
+    ? {
+      segmentsPerWavelength: refinement.comparedWithSegmentsPerWavelength,
+      feedGapM,
+      cache,
+      correction: { fineSegmentsPerWavelength: segmentsPerWavelength, frequenciesHz: [...new Set([shape.frequencyHz, ...bandCheckFrequencies(options.bandHz)])] },
+    }
+    : { segmentsPerWavelength, feedGapM, cache });
   return {
     design: {
       frequencyHz: shape.frequencyHz,
