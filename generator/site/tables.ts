@@ -227,8 +227,11 @@ export function checkRows(e: OkEntry): Row[] {
     { label: "Segments per wavelength", parts: [plain(`${c.segmentsPerWavelength[0]}, checked at ${c.segmentsPerWavelength[1]}`)] },
     ...(u ? [{
       label: "Stated uncertainty",
-      parts: [shown(`±${f.fixed(u.gainDb, 3)} dB`, "figures.uncertainty.gainDb"), plain(" gain, "), shown(`±${f.fixed(u.impedancePercent, 1)} %`, "figures.uncertainty.impedancePercent"), plain(" impedance")],
-      note: u.converged ? undefined : "the last mesh doubling still moved the figures more than 0.01 dB or 1 %; the finest mesh the thin-wire model allows is shown",
+      parts: [
+        shown(`±${f.fixed(u.gainDb, 3)} dB`, "figures.uncertainty.gainDb"), plain(" gain, "),
+        shown(`±${f.fixed(u.impedancePercent, 1)} %`, "figures.uncertainty.impedancePercent", "si"),
+        plain(u.converged ? " impedance (last mesh doubling)" : " impedance (last mesh doubling; above the 0.01 dB / 1 % aim on the finest mesh allowed)"),
+      ],
     }] : []),
     ...(gap !== undefined ? [{ label: "Feed gap assumed", parts: [shown(`${f.fixed(gap * 1000, 1)} mm`, "figures.feedGapM", "mm"), plain(" between the terminals (λ/50), the source voltage spread evenly over it")] }] : []),
     { label: "Gain change on refinement", parts: [shown(`${f.fixed(c.gainChangeDb, 3)} dB`, "checks.gainChangeDb")] },
