@@ -1,7 +1,6 @@
 // Segment counts that do not depend on how the coordinates were rounded (generator/em/mesh.ts):
 // a piece that is a whole number of segments long must mesh the same from the exact shape, from
 // the entry (7 significant digits, catalog/hash.ts) and from the coordinate table (1 µm, export/csv.ts).
-import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildMesh, validateShape, type Vec3 } from "../../generator/em/index.js";
 import { pieceSegmentCount } from "../../generator/em/mesh.js";
@@ -13,11 +12,12 @@ const roundMicrometre = (v: number) => Math.round(v * 1e6) / 1e6;
 
 describe("segment counts under rounding", () => {
   it("the old case: 10m-2wl-k1-max-gain, two pieces of exactly 1 λ, read back from its entry", () => {
-    // the committed entry's coordinates, 7 significant digits; each piece is 25.0000005 segments
-    // long at 25 per λ, so a plain ⌈x⌉ gave 26 segments where the exact 1 λ piece had 25
-    const entry = JSON.parse(readFileSync("designs/entries/10m-2wl-k1-max-gain.json", "utf8"));
+    // the entry's coordinates as committed with solver 1 (7 significant digits, 28.85 MHz); each
+    // piece is 25.0000005 segments long at 25 per λ, so a plain ⌈x⌉ gave 26 segments where the
+    // exact 1 λ piece had 25 (1416.4 − j2028.0 Ω from the shape file, 1425.1 − j2030.9 Ω published)
+    const entry = { inputs: { frequencyHz: 28.85e6 } };
     const lambdaM = SPEED_OF_LIGHT_M_PER_S / entry.inputs.frequencyHz;
-    const p: Vec3[] = entry.shape.pointsM;
+    const p: Vec3[] = [[-7.289224, 7.405999, 0], [0, 0, 0], [7.289224, 7.405999, 0]];
     const len = Math.hypot(p[1][0] - p[0][0], p[1][1] - p[0][1], p[1][2] - p[0][2]);
     expect(Math.ceil((len * 25) / lambdaM)).toBe(26); // the rule this replaces
     expect(pieceSegmentCount(len, 25, lambdaM)).toBe(25);
