@@ -1,17 +1,19 @@
 // The feed: a finite gap of fixed physical length g centred on the feed vertex, across which the
 // source voltage V0 appears as a uniform impressed field E = V0/g along the wire (the "finite gap"
-// or "uniform gap" source; Harrington, Field Computation by Moment Methods, 1968, §4.4;
-// Gibson, The Method of Moments in Electromagnetics, 2nd ed., §5.2 "Source models").
+// or "uniform gap" source of thin-wire moment methods; Harrington, Field Computation by Moment
+// Methods, 1968, ch. 4; Gibson, The Method of Moments in Electromagnetics, 2nd ed., the thin-wire
+// chapter on source models — chapters from memory).
 // Galerkin testing of that field against the triangle basis functions Λ_m gives the excitation
-//   V_m = ∫ E·ŝ Λ_m dl = (V0/g) ∫_gap Λ_m dl,        Σ_m V_m = V0 when the gap lies inside the mesh,
+//   V_m = ∫ E·ŝ Λ_m dl = (V0/g) ∫_gap Λ_m dl,        Σ_m V_m = V0 when the gap lies inside the wire,
 // spread over every basis function the gap overlaps (the delta gap is the limit g → 0: V_feed = V0).
-// Input figures for this distributed source (reaction form, Rumsey 1954; Harrington §4.4):
+// Input figures for this distributed source (reaction form; Rumsey, "Reaction concept in
+// electromagnetic theory", Phys. Rev. 94, 1954):
 //   Ī = (1/V0) Σ_m V_m I_m = (1/g) ∫_gap I dl   (the current averaged over the gap),
-//   Z_in = V0 / Ī,   P_in = ½ Re(Σ_m V_m I_m*) = ½ Re(V0 Ī*)   (V_m real),
-// so P_in is exactly the power the impressed field delivers and Z_in = V0² / (2 P_in*) holds
-// for the resistive part. Once the mesh resolves the gap (segments shorter than g/2) the excitation
-// stops changing with the mesh, which is what makes the feed reactance converge at high-impedance
-// feed points where a delta gap's own capacitance keeps growing as its segments shrink.
+//   Z_in = V0 / Ī,   P_in = ½ Re(Σ_m V_m I_m*) = ½ Re(V0 Ī*) = ½ V0² Re(1/Z_in)   (V_m real),
+// so P_in is exactly the power the impressed field delivers (the energy balance holds).
+// Once the mesh resolves the gap the excitation stops changing with the mesh, which is what lets
+// the feed reactance settle at high-impedance feed points, where a delta gap's own capacitance
+// keeps growing as its segments shrink.
 // The gap: g = λ0/50 at the design frequency (4.1 cm on a 145 MHz design), a fixed length in metres
 // for every other frequency of a sweep. The mesh resolves it (mesh.ts: segments at the feed no
 // longer than g/4, nor shorter than 4 wire radii, the thin-wire limit of geometryChecks.ts).
