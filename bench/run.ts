@@ -1,8 +1,9 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|catalog]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
 import { benchGround, benchGroundObjective } from "./ground.js";
+import { benchConverged } from "./converged.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchSolver } from "./solver.js";
 
@@ -52,6 +53,15 @@ if (wants("analysis")) {
   const a = benchAnalysis();
   out.analysis = a;
   if (!json) console.log(`\nanalysis of a 1.5λ K = 3 design (sweep, match, 64-sample tolerance, convergence): median ${a.medianMs.toFixed(0)} ms of ${a.runs}`);
+}
+
+if (wants("converged")) {
+  const c = benchConverged();
+  out.converged = c;
+  if (!json) {
+    console.log(`\nconverged vs single-mesh analysis, 1.5λ K = 3 (CPU s, median of ${c.runs}): 25/λ only ${c.singleMeshCpuS.toFixed(2)} s, converged ${c.convergedCpuS.toFixed(2)} s`);
+    console.log(`  refinement: published at ${c.publishedSegmentsPerWavelength}/λ after ${c.refinementSolves} solves; last doubling moved gain ${c.gainChangeDb.toFixed(4)} dB, impedance ${c.impedanceChangePercent.toFixed(2)} %`);
+  }
 }
 
 if (wants("catalog")) {

@@ -1,7 +1,11 @@
 // Everything a builder needs to know about one shape, in one pure function: the design-frequency
 // figures, a band sweep, a feed-match suggestion, a tolerance study, pattern figures and cuts, and
 // the trust figures. The CLI's `analyze --band-mhz` and the catalog both call this.
-import { solveShape, type Shape } from "../em/index.js";
+// Mesh: converged.ts refines from the shape's segments per wavelength until gain and impedance
+// settle at the design frequency and both band edges; the sweep, the pattern and the match use that
+// mesh. The tolerance Monte Carlo stays on the starting mesh (64 solves of the finest mesh would
+// cost too much) and compares its samples with that mesh's own nominal gain.
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { DEG_PER_RAD } from "../units.js";
 import { feedAnalysis, type FeedAnalysis } from "./feedAnalysis.js";
@@ -10,7 +14,8 @@ import { describeLobe, type LobeWords } from "./lobeWords.js";
 import {
   cutGainsDbi, frontToBackDb, gainGridDbi, halfPowerBeamwidthDeg, polarizationAt, principalCuts, type Polarization,
 } from "./patternFigures.js";
-import { bandSweep, type Sweep } from "./sweep.js";
+import { refineMesh, solveAt, uncertaintyOf, type SolveCache, type Uncertainty } from "./converged.js";
+import { bandSweep, sweepFrequencies, type Sweep } from "./sweep.js";
 import { DEFAULT_TOLERANCE, toleranceStudy, type ToleranceOptions, type ToleranceStudy } from "./tolerance.js";
 import { trustFigures, type TrustFigures } from "./trust.js";
 
@@ -24,6 +29,8 @@ export interface AnalysisOptions {
   tolerance: Omit<ToleranceOptions, "lineImpedanceOhm">;
   /** SWR limit the feed options and the as-built rule judge against (default 2). */
   swrLimit?: number;
+  /** Fix this one mesh (no refinement), for comparisons. */
+  segmentsPerWavelength?: number;
 }
 
 export interface PatternFigures {
@@ -48,6 +55,9 @@ export interface Analysis {
     directivityDbi: number;
     radiationEfficiency: number;
     peakDirection: { thetaDeg: number; phiDeg: number };
+    /** Length of the feed gap the source is spread over (m). */
+    feedGapM: number;
+    uncertainty: Uncertainty;
   };
   sweep: Sweep;
   match: MatchSuggestion;
@@ -71,15 +81,37 @@ export function checkAnalysisOptions(frequencyHz: number, o: AnalysisOptions): v
   }
 }
 
-export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis {
+/** The band edges as the sweep computes them, checked by the mesh refinement with the design frequency. */
+export function bandCheckFrequencies(bandHz: [number, number]): number[] {
+  const inBand = sweepFrequencies(bandHz).filter((p) => p.inBand).map((p) => p.frequencyHz);
+  return [inBand[0], inBand[inBand.length - 1]];
+}
+
+/** `cache` may be shared with a caller that solves the same shape (the CLI's summary). */
+export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: SolveCache = new Map()): Analysis {
   checkAnalysisOptions(shape.frequencyHz, options);
-  const s = solveShape(shape, { energyBalance: true });
+  const refinement = refineMesh(shape, { fixedSegmentsPerWavelength: options.segmentsPerWavelength, checkFrequenciesHz: bandCheckFrequencies(options.bandHz) }, cache);
+  const { segmentsPerWavelength, feedGapM } = refinement;
+  const s = solveAt(shape, shape.frequencyHz, segmentsPerWavelength, feedGapM, cache);
+  const baseSpw = options.segmentsPerWavelength ?? shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
+  const base = solveAt(shape, shape.frequencyHz, baseSpw, feedGapM, cache);
   const { theta, phi } = s.peakDirectionRad;
   const cuts = principalCuts(theta, phi);
   const polarization = polarizationAt(s.farField, theta, phi);
-  const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm);
+  // a refined mesh: sweep on the coarser mesh of the last doubling, corrected to the finest (sweep.ts)
+  const refined = options.segmentsPerWavelength === undefined;
+  const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm, refined
+    ? {
+      segmentsPerWavelength: refinement.comparedWithSegmentsPerWavelength,
+      feedGapM,
+      cache,
+      correction: { fineSegmentsPerWavelength: segmentsPerWavelength, frequenciesHz: [...new Set([shape.frequencyHz, ...bandCheckFrequencies(options.bandHz)])] },
+    }
+    : { segmentsPerWavelength, feedGapM, cache });
+  // the bent copies run on the starting mesh, against that mesh's own nominal (their spread is what counts)
+  const baseShape = { ...shape, segmentsPerWavelength: baseSpw };
   const toleranceOptions = { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm };
-  const tolerance = toleranceStudy(shape, s.peakGainDbi, toleranceOptions);
+  const tolerance = toleranceStudy(baseShape, base.peakGainDbi, toleranceOptions);
   return {
     design: {
       frequencyHz: shape.frequencyHz,
@@ -89,6 +121,8 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
       directivityDbi: s.peakDirectivityDbi,
       radiationEfficiency: s.radiationEfficiency,
       peakDirection: { thetaDeg: theta * DEG_PER_RAD, phiDeg: phi * DEG_PER_RAD },
+      feedGapM,
+      uncertainty: uncertaintyOf(refinement),
     },
     sweep,
     match: suggestMatch(sweep, shape.frequencyHz, s.inputImpedanceOhm),
@@ -103,8 +137,8 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
       cutAlongPhiDbi: cutGainsDbi(s.farField, cuts.alongPhi, s.inputPowerW, CUT_STEP_DEG),
       gridDbi: gainGridDbi(s.farField, s.inputPowerW, GRID_THETA_STEP_DEG, GRID_PHI_STEP_DEG),
     },
-    checks: trustFigures(shape, s),
+    checks: trustFigures(refinement, s),
     warnings: s.warnings,
-    feed: feedAnalysis(shape, sweep, s, toleranceOptions, tolerance, { bandHz: options.bandHz, lineImpedanceOhm: options.lineImpedanceOhm, swrLimit: options.swrLimit }),
+    feed: feedAnalysis(baseShape, sweep, s, toleranceOptions, tolerance, { bandHz: options.bandHz, lineImpedanceOhm: options.lineImpedanceOhm, swrLimit: options.swrLimit }),
   };
 }

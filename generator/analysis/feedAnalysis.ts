@@ -66,7 +66,8 @@ export function feedAnalysis(
     swrLimit,
   });
   // the bent copies are solved once; every feed that meets the limit nominally is then judged on them
-  const copies = copyImpedances(shape, toleranceFrequencies(o.bandHz, o.toleranceSwrFrequencies ?? DEFAULT_TOLERANCE_SWR_FREQUENCIES), tolerance);
+  const copyFrequenciesHz = toleranceFrequencies(o.bandHz, o.toleranceSwrFrequencies ?? DEFAULT_TOLERANCE_SWR_FREQUENCIES);
+  const copies = copyImpedances(shape, copyFrequenciesHz, { ...tolerance, nominalOhm: copyFrequenciesHz.map((f) => sweepImpedanceAt(sweep, f)) });
   const transformOf = (x: FeedOption) => (z: { re: number; im: number }, f: number) => applyFeed(x.circuit, z, f, options.partQ).impedanceOhm;
   for (const x of options.options) x.holdsAsBuilt = x.meetsLimit && swrStudyOf(copies, swrLimit, transformOf(x)).meetsLimitAsBuilt;
   // prefer the best feed that also holds as built; when none does, keep the nominal choice and say so
@@ -89,4 +90,14 @@ export function feedAnalysis(
     toleranceSwr,
     verdict: toleranceVerdict(gainStudy, toleranceSwr),
   };
+}
+
+/** The sweep's impedance at f, linear between its neighbouring points (the sweep is dense in the band). */
+export function sweepImpedanceAt(sweep: Sweep, frequencyHz: number): { re: number; im: number } {
+  const p = sweep.points;
+  let i = 0;
+  while (i < p.length - 2 && p[i + 1].frequencyHz < frequencyHz) i++;
+  const a = p[i], b = p[i + 1] ?? a;
+  const t = b.frequencyHz === a.frequencyHz ? 0 : (frequencyHz - a.frequencyHz) / (b.frequencyHz - a.frequencyHz);
+  return { re: a.impedanceOhm.re + t * (b.impedanceOhm.re - a.impedanceOhm.re), im: a.impedanceOhm.im + t * (b.impedanceOhm.im - a.impedanceOhm.im) };
 }

@@ -2,8 +2,9 @@
 // in the units a person reads (degrees). Pure, so the browser designer reports the same fields.
 import { SOLVER_VERSION, type Solution } from "../em/index.js";
 import { DEG_PER_RAD } from "../units.js";
+import { uncertaintyOf, type Refinement } from "./converged.js";
 
-export function solutionSummary(solution: Solution) {
+export function solutionSummary(solution: Solution, refinement?: Refinement) {
   return {
     solverVersion: SOLVER_VERSION,
     frequencyHz: solution.frequencyHz,
@@ -18,6 +19,8 @@ export function solutionSummary(solution: Solution) {
       phiDeg: solution.peakDirectionRad.phi * DEG_PER_RAD,
     },
     energyBalanceError: solution.energyBalanceError,
+    feedGapM: solution.feedGapM,
+    ...(refinement && { uncertainty: uncertaintyOf(refinement) }),
     warnings: solution.warnings,
     ...groundSummary(solution),
   };

@@ -5,7 +5,7 @@
 // The publishing rule: a design is published as meeting SWR ≤ limit only when the 90th percentile
 // of its copies meets the limit at every checked frequency of the band (so at most one hand-built
 // copy in ten exceeds it anywhere in the band). The verdict joins that with the gain verdict.
-import { DEFAULT_SEGMENTS_PER_WAVELENGTH, solveFeed, type Shape } from "../em/index.js";
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH, feedGapM, solveFeed, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { createRng } from "../optimize/rng.js";
 import type { Complex } from "./complex.js";
@@ -67,20 +67,28 @@ export interface CopyImpedances {
   lineImpedanceOhm: number;
 }
 
-export function copyImpedances(shape: Shape, frequenciesHz: readonly number[], options: ToleranceOptions): CopyImpedances {
+export function copyImpedances(shape: Shape, frequenciesHz: readonly number[], options: ToleranceOptions & { nominalOhm?: readonly Complex[] }): CopyImpedances {
   if (!(Number.isInteger(options.samples) && options.samples > 0)) {
     throw new InputError(`tolerance: samples must be a whole number above 0 (got ${options.samples})`);
   }
   const rng = createRng(options.seed);
-  // the mesh stays the one of the design frequency, as in the band sweep (sweep.ts)
+  // the mesh stays the one of the design frequency, as in the band sweep (sweep.ts), and so does the
+  // feed gap in metres (em/feedSource.ts)
   const spw0 = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
+  const gapM = feedGapM(shape.frequencyHz);
+  const solveAt = (s: Shape, f: number) => solveFeed({ ...s, frequencyHz: f }, { segmentsPerWavelength: (spw0 * shape.frequencyHz) / f, feedGapM: gapM }).inputImpedanceOhm;
+  // each copy's impedance moves by the nominal's own mesh correction (converged − starting mesh), so
+  // the copies scatter around the published sweep rather than around the coarser mesh's figures
+  const shift = options.nominalOhm
+    ? frequenciesHz.map((f, k) => { const z = solveAt(shape, f); return { re: options.nominalOhm![k].re - z.re, im: options.nominalOhm![k].im - z.im }; })
+    : frequenciesHz.map(() => ({ re: 0, im: 0 }));
   const impedances: Complex[][] = [];
   let failed = 0;
   for (let i = 0; i < options.samples; i++) {
     const copy = perturbShape(shape, rng, options);
     try {
       // solve every frequency first so a failed copy adds nothing
-      impedances.push(frequenciesHz.map((f) => solveFeed({ ...copy, frequencyHz: f }, { segmentsPerWavelength: (spw0 * shape.frequencyHz) / f }).inputImpedanceOhm));
+      impedances.push(frequenciesHz.map((f, k) => { const z = solveAt(copy, f); return { re: z.re + shift[k].re, im: z.im + shift[k].im }; }));
     } catch (err) {
       if (!(err instanceof InputError)) throw err;
       failed++; // the bent copy touched itself: counted, not solved

@@ -1,22 +1,23 @@
-// How far to trust a design's numbers: segment convergence (gain and impedance change when the
-// segments per wavelength double; a converged discretisation changes little, Gibson ch. 4) and the
-// energy balance |∫U dΩ − P_rad| / P_rad from the solve itself.
-import { DEFAULT_SEGMENTS_PER_WAVELENGTH, solveShape, type Shape, type Solution } from "../em/index.js";
+// How far to trust a design's numbers: segment convergence (gain and impedance change between the
+// published mesh and the one it was compared with, converged.ts; a converged discretisation changes
+// little, Gibson ch. 4) and the energy balance |∫U dΩ − P_rad| / P_rad from the solve itself.
+import type { Solution } from "../em/index.js";
+import type { Refinement } from "./converged.js";
 
 export interface TrustFigures {
+  /** [published, compared with]. */
   segmentsPerWavelength: [number, number];
   gainChangeDb: number;
   impedanceChangeOhm: number;
   energyBalanceError: number;
 }
 
-export function trustFigures(shape: Shape, nominal: Solution): TrustFigures {
-  const spw = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
-  const fine = solveShape(shape, { segmentsPerWavelength: 2 * spw });
+export function trustFigures(refinement: Refinement, nominal: Solution): TrustFigures {
   return {
-    segmentsPerWavelength: [spw, 2 * spw],
-    gainChangeDb: fine.peakGainDbi - nominal.peakGainDbi,
-    impedanceChangeOhm: Math.hypot(fine.inputImpedanceOhm.re - nominal.inputImpedanceOhm.re, fine.inputImpedanceOhm.im - nominal.inputImpedanceOhm.im),
+    segmentsPerWavelength: [refinement.segmentsPerWavelength, refinement.comparedWithSegmentsPerWavelength],
+    gainChangeDb: refinement.change.gainDb, // finer minus coarser mesh
+
+    impedanceChangeOhm: refinement.change.impedanceOhm,
     energyBalanceError: nominal.energyBalanceError ?? NaN,
   };
 }

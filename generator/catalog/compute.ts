@@ -14,7 +14,7 @@ import { addPiece } from "../shapes/bentArm.js";
 import { parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { SOLVER_VERSION } from "../em/index.js";
 import { SPEED_OF_LIGHT_M_PER_S } from "../units.js";
-import { buildEntry } from "./entryBuild.js";
+import { buildEntry, publishedShapeOf } from "./entryBuild.js";
 import type { Entry } from "./entrySchema.js";
 import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
@@ -138,4 +138,5 @@ export function computeEntry(grid: Grid, cell: CellRequest, reference: Reference
   return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance });
 }
 
-const shapeFor = (o: DesignOutcome, r: DesignRequest) => shapeOf(o.x, r);
+// analysed as published (rounded), so the entry reproduces from its own shape file
+const shapeFor = (o: DesignOutcome, r: DesignRequest) => publishedShapeOf(shapeOf(o.x, r));

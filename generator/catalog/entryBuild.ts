@@ -10,7 +10,8 @@ import { DEG_PER_RAD, wavelengthM } from "../units.js";
 import { CUT_STEP_DEG, GRID_PHI_STEP_DEG, GRID_THETA_STEP_DEG } from "../analysis/analyzeDesign.js";
 import { ENTRY_SCHEMA_VERSION, type Entry } from "./entrySchema.js";
 import type { CellRequest, Grid } from "./grid.js";
-import { canonicalJson, roundDeep, sha256 } from "./hash.js";
+import { canonicalJson, roundDeep, roundSignificant, sha256 } from "./hash.js";
+import type { Shape } from "../em/index.js";
 import { GENERATOR_VERSION } from "./versions.js";
 
 
@@ -23,6 +24,28 @@ export interface EntryParts {
   analysis: Analysis | null;
   inputHash: string;
   tolerance: { samples: number; bendSigmaDeg: number; lengthSigmaFraction: number };
+}
+
+/**
+ * The shape exactly as its entry publishes it (7 significant digits, hash.ts), which is what the
+ * site's shape file holds: analysing this one makes the entry reproduce from its own download.
+ */
+export function publishedShapeOf(shape: Shape): Shape {
+  return {
+    ...shape,
+    frequencyHz: roundSignificant(shape.frequencyHz),
+    wireRadiusM: roundSignificant(2 * shape.wireRadiusM) / 2,
+    wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map((p) => p.map((c) => roundSignificant(c)) as [number, number, number]) })),
+  };
+}
+
+/** A direct-feed claim checked on the published sweep: the message says when it does not hold. */
+export function sweepHonestMessage(message: string, request: DesignRequest, analysis: Analysis): string {
+  if (request.variant !== "direct-feed") return message;
+  const worst = Math.max(...analysis.sweep.points.filter((p) => p.inBand).map((p) => p.swr));
+  if (!(worst > request.swrLimit)) return message;
+  const spw = request.segmentsPerWavelength ?? 25;
+  return `the search kept the SWR at or below ${request.swrLimit} on its ${spw}-per-wavelength mesh, but on the published converged sweep it reaches ${worst.toFixed(2)} in the band; trim the tips or add a match network after building`;
 }
 
 const variantWords = { "max-gain": "most gain", "direct-feed": "direct 50 Ω feed" } as const;
@@ -46,7 +69,7 @@ export function buildEntry(p: EntryParts): Entry {
     id: cell.id,
     title: entryTitle(cell),
     status: ok ? "ok" : "infeasible",
-    message: outcome.message,
+    message: ok ? sweepHonestMessage(outcome.message, request, a) : outcome.message,
     inputs: {
       bandId: cell.band.id,
       bandName: cell.band.name,
@@ -89,6 +112,8 @@ export function buildEntry(p: EntryParts): Entry {
       polarization: a.pattern.polarization,
       lobe: a.pattern.words.lobe,
       mounting: a.pattern.words.mounting,
+      feedGapM: a.design.feedGapM,
+      uncertainty: a.design.uncertainty,
     } : null,
     sweep: ok ? a.sweep : null,
     match: ok ? a.match : null,

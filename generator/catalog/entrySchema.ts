@@ -53,6 +53,16 @@ export function makeEntrySchema(z: Z) {
     polarization: z.object({ tiltDeg: num, axialRatioDb: num, sense: z.enum(["linear", "right-hand", "left-hand"]) }).strict(),
     lobe: z.string(),
     mounting: z.string(),
+    /** Length of the feed gap the source is spread over (m); absent in entries before solver 2. */
+    feedGapM: num.optional(),
+    /** Change of gain and impedance at the last mesh doubling (analysis/converged.ts). */
+    uncertainty: z.object({
+      gainDb: num,
+      impedancePercent: num,
+      segmentsPerWavelength: num,
+      comparedWithSegmentsPerWavelength: num,
+      converged: z.boolean(),
+    }).strict().optional(),
   }).strict();
   const sweep = z.object({
     lineImpedanceOhm: num,

@@ -53,7 +53,7 @@ export function analysisText(a: Analysis): string {
   const c = a.checks;
   out.push(
     "",
-    `trust: doubling segments (${c.segmentsPerWavelength[0]} → ${c.segmentsPerWavelength[1]} per λ) moves gain ${fixed(c.gainChangeDb, 3)} dB and impedance ${fixed(c.impedanceChangeOhm, 2)} Ω; energy balance error ${c.energyBalanceError.toExponential(2)}`,
+    `trust: figures at ${c.segmentsPerWavelength[0]} segments per λ; against ${c.segmentsPerWavelength[1]} per λ gain moves ${fixed(c.gainChangeDb, 3)} dB and impedance ${fixed(c.impedanceChangeOhm, 2)} Ω (${fixed(a.design.uncertainty.impedancePercent, 2)} %); energy balance error ${c.energyBalanceError.toExponential(2)}`,
   );
   return out.join("\n");
 }

@@ -1,7 +1,7 @@
 // `analyze <shape.json>`: solves one shape and reports its figures, readable or as one JSON object.
-import { analyzeDesign, checkAnalysisOptions, DEFAULT_TOLERANCE } from "../analysis/index.js";
+import { analyzeDesign, bandCheckFrequencies, checkAnalysisOptions, convergedSolution, DEFAULT_TOLERANCE } from "../analysis/index.js";
 import { solutionSummary, type SolutionSummary } from "../analysis/solutionSummary.js";
-import { parseShape, solveShape, type Shape } from "../em/index.js";
+import { parseShape, type Shape } from "../em/index.js";
 import { checkProblemSize } from "../em/shapeFile.js";
 import { DEFAULT_SEGMENTS_PER_WAVELENGTH } from "../em/mesh.js";
 import { SHAPE_BOUNDS } from "../bounds.js";
@@ -51,6 +51,11 @@ export function summaryText(label: string, s: SolutionSummary): string {
     `  efficiency           ${fixed(100 * s.radiationEfficiency, 3)} %`,
     `  peak direction       θ ${fixed(s.peakDirection.thetaDeg, 1)}°, φ ${fixed(s.peakDirection.phiDeg, 1)}° (θ from +z, φ from +x toward +y)`,
   ];
+  if (s.uncertainty) {
+    const u = s.uncertainty;
+    lines.push(`  mesh                 ${u.segmentsPerWavelength} segments per wavelength; against ${u.comparedWithSegmentsPerWavelength} per wavelength gain moves ${fixed(u.gainDb, 3)} dB, impedance ${fixed(u.impedancePercent, 2)} %${u.converged ? "" : " (above the 0.01 dB / 1 % aim)"}`);
+  }
+  lines.push(`  feed gap             ${fixed(s.feedGapM * 1000, 1)} mm (the source voltage spread evenly over it)`);
   if (s.energyBalanceError !== null) lines.push(`  energy balance error ${s.energyBalanceError.toExponential(2)} (pattern integral vs. radiated power)`);
   lines.push(...groundText(s));
   for (const w of s.warnings) lines.push(`  warning: ${w}`);
@@ -70,12 +75,15 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
   if (loaded.ground && options.bandMhz) {
     throw new InputError("analyze: --band-mhz is not available over ground yet (its sweep, match and pattern figures are free-space ones); run without it");
   }
-  const shape = options.segmentsPerWavelength ? { ...loaded, segmentsPerWavelength: options.segmentsPerWavelength } : loaded;
-  if (options.segmentsPerWavelength) checkProblemSize(shape, options.segmentsPerWavelength, path);
+  const shape = loaded;
+  // converged by default (analysis/converged.ts); --segments-per-wavelength fixes one mesh
+  const fixedSpw = options.segmentsPerWavelength;
+  if (fixedSpw) checkProblemSize(shape, fixedSpw, path);
   const analysisOptions = options.bandMhz && {
     bandHz: options.bandMhz,
     lineImpedanceOhm: options.lineOhm,
     tolerance: { ...DEFAULT_TOLERANCE, samples: options.toleranceSamples, seed: options.seed },
+    segmentsPerWavelength: fixedSpw,
   };
   if (analysisOptions) {
     checkAnalysisOptions(shape.frequencyHz, analysisOptions);
@@ -86,9 +94,12 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
     checkProblemSize({ ...shape, frequencyHz: highHz }, (spw * shape.frequencyHz) / highHz, `${path} (at the band's high edge)`);
     checkProblemSize(shape, 2 * spw, `${path} (the convergence check at twice the segments per wavelength)`);
   }
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  const cache = new Map();
+  const checkFrequenciesHz = options.bandMhz ? bandCheckFrequencies(options.bandMhz) : [];
+  const { solution, refinement } = convergedSolution(shape, { fixedSegmentsPerWavelength: fixedSpw, checkFrequenciesHz }, cache);
+  const summary = solutionSummary(solution, refinement);
   checkFinite(path, summary);
-  const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions) : null;
+  const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions, cache) : null;
   if (options.json) {
     const extra = analysis && { sweep: analysis.sweep, match: analysis.match, tolerance: analysis.tolerance, pattern: analysis.pattern, checks: analysis.checks, feed: analysis.feed };
     process.stdout.write(`${JSON.stringify({ ...summary, ...extra })}\n`);

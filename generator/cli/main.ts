@@ -7,6 +7,7 @@ import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCom
 import { designCommand } from "./designCommand.js";
 import { bandMhz, nonEmpty, numberIn, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { ANALYSIS_BOUNDS as A, SHAPE_BOUNDS as S } from "../bounds.js";
+import { shapeCommand } from "./shapeCommand.js";
 import { VARIANTS } from "../design/request.js";
 import { GROUND_FLAG_HELP, groundName, heightM } from "./groundOptions.js";
 import { MOUNTINGS } from "../shapes/mounting.js";
@@ -52,6 +53,13 @@ program
   .option("--out <file>", "write the winning shape as a shape file (checked before the search)", nonEmpty("--out"))
   .option("--keep-infeasible", "write --out even when no shape meets the limits (exit status 3 all the same)")
   .action((opts) => designCommand(opts));
+
+program
+  .command("shape")
+  .description("print a catalog design's shape file (the same bytes as the site's download)")
+  .argument("<entry-id>", "catalog entry id, e.g. 2m-1.5wl-k3-max-gain")
+  .option("--entries <dir>", "entries folder", DEFAULT_ENTRIES)
+  .action((id: string, opts) => shapeCommand(id, opts));
 
 program
   .command("generate")

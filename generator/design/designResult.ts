@@ -2,7 +2,7 @@
 // outcome, the winning shape solved once more with the energy balance, its parameters in builder's
 // units, and the optimizer's record. One function, so both front ends give the same fields.
 import { solutionSummary } from "../analysis/solutionSummary.js";
-import { solveShape } from "../em/index.js";
+import { convergedSolution } from "../analysis/converged.js";
 import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
 import { DEG_PER_RAD, SPEED_OF_LIGHT_M_PER_S } from "../units.js";
 import type { DesignOutcome } from "./designBentArm.js";
@@ -43,7 +43,9 @@ export function overGroundReport(request: DesignRequest, outcome: DesignOutcome,
 
 export function designResult(request: DesignRequest, outcome: DesignOutcome, message = outcome.message) {
   const shape = designShape(outcome.x, request);
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  // the figures converged as `analyze` reports them (the search itself runs on the starting mesh)
+  const { solution, refinement } = convergedSolution(shape);
+  const summary = solutionSummary(solution, refinement);
   return {
     status: outcome.status,
     message,

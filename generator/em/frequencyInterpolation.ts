@@ -17,7 +17,8 @@ import { buildMesh, DEFAULT_SEGMENTS_PER_WAVELENGTH, type Mesh } from "./mesh.js
 import { fillImpedanceMirror, solveImpedanceSystem } from "./mirrorSolve.js";
 import { detectMirrorSymmetry, type MirrorSymmetry } from "./mirrorSymmetry.js";
 import type { Shape } from "./shapeFile.js";
-import { conductivityOf, solveFeed } from "./solve.js";
+import { feedGapM, feedSegmentM, gapCurrent } from "./feedSource.js";
+import { conductivityOf, feedExcitation, solveFeed } from "./solve.js";
 
 /** (f_max − f_min)/f_centre above which every frequency gets its own fill. */
 export const MAX_RELATIVE_BANDWIDTH = 0.08;
@@ -45,20 +46,20 @@ function basisNodes(mesh: Mesh): Float64Array {
  */
 export function bandImpedances(shape: Shape, frequenciesHz: readonly number[], options: { interpolate?: boolean } = {}): { re: number; im: number }[] {
   if (frequenciesHz.length === 0) return [];
+  const gapM = feedGapM(shape.frequencyHz); // the design's gap, fixed in metres across the band
   if (shape.ground) {
     // over ground the image terms join the matrix (solve.ts): solve each frequency on the same mesh
     const spw = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
-    return frequenciesHz.map((f) => solveFeed({ ...shape, frequencyHz: f }, { segmentsPerWavelength: (spw * shape.frequencyHz) / f }).inputImpedanceOhm);
+    return frequenciesHz.map((f) => solveFeed({ ...shape, frequencyHz: f }, { segmentsPerWavelength: (spw * shape.frequencyHz) / f, feedGapM: gapM }).inputImpedanceOhm);
   }
-  const mesh = buildMesh(shape);
+  const mesh = buildMesh(shape, undefined, feedSegmentM(gapM, shape.wires[shape.feed.wire].radiusM ?? shape.wireRadiusM)); // as solveFeed meshes it
   const sym = detectMirrorSymmetry(mesh);
   const n = mesh.unknowns;
   const lo = Math.min(...frequenciesHz), hi = Math.max(...frequenciesHz);
   const mid = 0.5 * (lo + hi);
   const interpolate = options.interpolate !== false && hi > lo && (hi - lo) / mid <= MAX_RELATIVE_BANDWIDTH && frequenciesHz.length > 3;
   const sigma = conductivityOf(shape.conductor);
-  const bRe = new Float64Array(n), bIm = new Float64Array(n);
-  bRe[mesh.feedBasis] = 1; // 1 V delta gap, as in solveFeed
+  const bRe = feedExcitation(shape, mesh, gapM), bIm = new Float64Array(n); // as in solveFeed
   let nodes: { f: number[]; tilde: ComplexMatrix[]; dist: Float64Array } | null = null;
   if (interpolate) {
     const f = [lo, mid, hi];
@@ -106,7 +107,7 @@ export function bandImpedances(shape: Shape, frequenciesHz: readonly number[], o
       addConductorLoss(z, mesh, rPerM);
     }
     const x = solveImpedanceSystem(z, sym, bRe, bIm);
-    const ir = x.re[mesh.feedBasis], ii = x.im[mesh.feedBasis];
+    const { re: ir, im: ii } = gapCurrent(bRe, x.re, x.im);
     const i2 = ir * ir + ii * ii;
     return { re: ir / i2, im: -ii / i2 };
   });

@@ -106,6 +106,7 @@ export function solutionOverGround(shape: Shape, feed: FeedSolution, options: So
     frequencyHz: shape.frequencyHz,
     unknowns: mesh.unknowns,
     segments: mesh.segmentCount,
+    feedGapM: feed.feedGapM,
     mesh,
     currentRe: feed.currentRe,
     currentIm: feed.currentIm,

@@ -5,3 +5,4 @@ export { farFieldAt, intensityAt, createFarFieldPlan, type FarFieldPlan } from "
 export { findPeak, integratePattern, patternPointsFor } from "./pattern.js";
 export { fillImpedance } from "./impedance.js";
 export { solveComplex, createComplexMatrix, type ComplexMatrix } from "./complexLu.js";
+export { FEED_GAP_WL, feedGapM, gapExcitation } from "./feedSource.js";

@@ -1,14 +1,24 @@
 // Cuts each polyline into straight segments and numbers the triangle (rooftop) basis functions.
-// Every piece between two vertices gets n = max(minPerPiece, ⌈pieceLength·segmentsPerWavelength/λ⌉)
-// equal segments. A basis function sits on every node of a wire except its two free ends and
-// spans the segment before and the segment after, so current is continuous through bends and zero
-// at free ends (Harrington 1968; Gibson, The Method of Moments in Electromagnetics, thin wires).
+// Every piece between two vertices gets n = max(minPerPiece, ⌈x·(1 − ε)⌉) equal segments, with
+// x = pieceLength·segmentsPerWavelength/λ and ε = 1e-3: a piece that is a whole number of segments
+// long keeps that number when its end points are rounded (7 significant digits in the entries,
+// 1 µm in the coordinate table), instead of gaining one from a rounding error of a few parts per
+// million; a piece up to 0.1 % longer than whole gets segments up to 0.1 % longer than nominal.
+// Near the feed the mesh resolves the source gap (feedSource.ts): the segment of each feed piece
+// that touches the feed vertex is halved, repeatedly and towards the feed, until the segments at
+// the feed are no longer than `feedSegmentM` (lengths d/2, d/4, …, d/2^m, d/2^m; neighbours
+// differ by at most a factor 2), the same on both sides so mirror-symmetric shapes stay so.
+// A basis function sits on every node of a wire except its two free ends and spans the segment
+// before and the segment after, so current is continuous through bends and zero at free ends
+// (Harrington 1968; Gibson, The Method of Moments in Electromagnetics, thin wires).
 import { InputError } from "../errors.js";
 import { wavelengthM } from "../units.js";
 import type { Shape } from "./shapeFile.js";
 
 export const DEFAULT_SEGMENTS_PER_WAVELENGTH = 25;
 export const MIN_SEGMENTS_PER_PIECE = 3;
+/** Relative slack before rounding a segment count up (see the header). */
+export const SEGMENT_COUNT_SLACK = 1e-3;
 
 export interface Mesh {
   segmentCount: number;
@@ -29,10 +39,40 @@ export interface Mesh {
   feedBasis: number;
 }
 
-export function buildMesh(shape: Shape, segmentsPerWavelength?: number): Mesh {
+/** Equal segments of a piece: ⌈x(1 − ε)⌉, at least MIN_SEGMENTS_PER_PIECE. */
+export function pieceSegmentCount(lengthM: number, segmentsPerWavelength: number, wavelengthMeters: number): number {
+  const x = (lengthM * segmentsPerWavelength) / wavelengthMeters;
+  return Math.max(MIN_SEGMENTS_PER_PIECE, Math.ceil(x * (1 - SEGMENT_COUNT_SLACK)));
+}
+
+/** Halvings of a segment of length d until it is no longer than h (same slack as the counts). */
+export function feedHalvings(segmentM: number, feedSegmentM: number): number {
+  let m = 0;
+  while (segmentM / 2 ** m > feedSegmentM * (1 + SEGMENT_COUNT_SLACK) && m < 30) m++;
+  return m;
+}
+
+/** Fractions of the piece at which segments end, from its start (last one is 1). */
+function pieceBreaks(n: number, halvings: number, feedAtStart: boolean, feedAtEnd: boolean): number[] {
+  // graded lengths in units of one uniform segment, from the feed outward: 2^-m, 2^-m, …, 1/2
+  const graded = halvings === 0 ? [1] : [2 ** -halvings, ...Array.from({ length: halvings }, (_, j) => 2 ** (j - halvings))];
+  const units: number[] = [];
+  for (let k = 0; k < n; k++) {
+    if (feedAtStart && k === 0) units.push(...graded);
+    else if (feedAtEnd && k === n - 1) units.push(...[...graded].reverse());
+    else units.push(1);
+  }
+  const breaks: number[] = [];
+  let acc = 0;
+  for (const u of units) { acc += u; breaks.push(acc / n); }
+  breaks[breaks.length - 1] = 1;
+  return breaks;
+}
+
+export function buildMesh(shape: Shape, segmentsPerWavelength?: number, feedSegmentM = Infinity): Mesh {
   const spw = segmentsPerWavelength ?? shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
   const lambdaM = wavelengthM(shape.frequencyHz);
-  const counts: number[][] = shape.wires.map((wire, w) =>
+  const lengths: number[][] = shape.wires.map((wire, w) =>
     wire.pointsM.slice(1).map((b, i) => {
       const a = wire.pointsM[i];
       const len = Math.hypot(b[0] - a[0], b[1] - a[1], b[2] - a[2]);
@@ -41,10 +81,18 @@ export function buildMesh(shape: Shape, segmentsPerWavelength?: number): Mesh {
           `shape: wires[${w}].pointsM[${i + 1}]: piece ${i} has zero length (a point repeats the one before it)`,
         );
       }
-      return Math.max(MIN_SEGMENTS_PER_PIECE, Math.ceil((len * spw) / lambdaM));
+      return len;
     }),
   );
-  const segmentCount = counts.flat().reduce((s, c) => s + c, 0);
+  const { wire: fw, vertex: fv } = shape.feed;
+  const counts = lengths.map((row) => row.map((len) => pieceSegmentCount(len, spw, lambdaM)));
+  // one number of halvings for both feed pieces (the coarser of the two decides), so a mirror
+  // image of one arm meshes exactly as the other
+  const halvings = Number.isFinite(feedSegmentM)
+    ? Math.max(feedHalvings(lengths[fw][fv - 1] / counts[fw][fv - 1], feedSegmentM), feedHalvings(lengths[fw][fv] / counts[fw][fv], feedSegmentM))
+    : 0;
+  const breaks = counts.map((row, w) => row.map((n, i) => pieceBreaks(n, w === fw ? halvings : 0, w === fw && i === fv, w === fw && i === fv - 1)));
+  const segmentCount = breaks.flat().reduce((s, b) => s + b.length, 0);
   const mesh: Mesh = {
     segmentCount,
     start: new Float64Array(3 * segmentCount),
@@ -65,18 +113,20 @@ export function buildMesh(shape: Shape, segmentsPerWavelength?: number): Mesh {
     const first = s;
     wire.pointsM.slice(1).forEach((b, i) => {
       const a = wire.pointsM[i];
-      const n = counts[w][i];
-      const len = Math.hypot(b[0] - a[0], b[1] - a[1], b[2] - a[2]);
-      if (w === shape.feed.wire && i === shape.feed.vertex) mesh.feedBasis = basis + (s - first) - 1;
-      for (let k = 0; k < n; k++, s++) {
+      const len = lengths[w][i];
+      if (w === fw && i === fv) mesh.feedBasis = basis + (s - first) - 1;
+      let t0 = 0;
+      for (const t1 of breaks[w][i]) {
         for (let c = 0; c < 3; c++) {
-          mesh.start[3 * s + c] = a[c] + ((b[c] - a[c]) * k) / n;
+          mesh.start[3 * s + c] = a[c] + (b[c] - a[c]) * t0;
           mesh.dir[3 * s + c] = (b[c] - a[c]) / len;
         }
-        mesh.lengthM[s] = len / n;
+        mesh.lengthM[s] = len * (t1 - t0);
         mesh.radiusM[s] = radiusM;
         mesh.wireOf[s] = w;
         mesh.pieceOf[s] = i;
+        t0 = t1;
+        s++;
       }
     });
     // nodes between consecutive segments of this wire carry basis functions

@@ -1,10 +1,12 @@
 // One solve of a shape at its frequency: mesh → impedance matrix (+ conductor loss) → currents for
-// a 1 V delta-gap feed → input impedance, powers, peak gain, directivity and efficiency.
-//   Z_in = V / I_feed,  P_in = ½ Re(V I*),  P_loss = ½ Σ_s R'_s ∫|I(l)|² dl,  P_rad = P_in − P_loss,
+// a 1 V source spread over a finite gap at the feed (feedSource.ts) → input impedance, powers, peak
+// gain, directivity and efficiency.
+//   Z_in = V0 / Ī (Ī the gap-averaged current),  P_in = ½ Re(Σ V_m I_m*) = ½ Re(V0 Ī*),  P_loss = ½ Σ_s R'_s ∫|I(l)|² dl,  P_rad = P_in − P_loss,
 //   G = 4πU_max / P_in,  D = 4πU_max / P_rad,  e = P_rad / P_in   (IEEE Std 145-2013 definitions).
 // Energy balance: |∫U dΩ − P_rad| / P_rad, a check that the matrix and the far field agree.
 import { CONDUCTIVITY_S_PER_M, toDb, wavenumberRadPerM } from "../units.js";
 import { createFarFieldPlan, type FarFieldPlan } from "./farField.js";
+import { feedGapM as defaultFeedGapM, feedSegmentM, gapCurrent, gapExcitation } from "./feedSource.js";
 import { checkMesh } from "./geometryChecks.js";
 import { fillImpedanceMirror, solveImpedanceSystem } from "./mirrorSolve.js";
 import { detectMirrorSymmetry } from "./mirrorSymmetry.js";
@@ -14,14 +16,17 @@ import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
 import { imageFactor } from "./ground.js";
 import { addImageCoupling } from "./groundImage.js";
 import { withGroundedEnds } from "./groundMesh.js";
+import { isGroundedFeed } from "./groundShape.js";
 import { solutionOverGround, type GroundFigures } from "./groundSolve.js";
 import { DEFAULT_PEAK_OPTIONS, findPeak, integratePattern, patternPointsFor, type PeakOptions } from "./pattern.js";
 import type { Conductor, Shape } from "./shapeFile.js";
 
-export const SOLVER_VERSION = "bentwire-em-1";
+export const SOLVER_VERSION = "bentwire-em-2";
 
 export interface SolveOptions {
   segmentsPerWavelength?: number;
+  /** Feed gap length (m); default λ/50 at the shape's frequency. A sweep passes the design's gap. */
+  feedGapM?: number;
   /** Free space and perfect ground: integrate the pattern. Real ground integrates unless false. */
   energyBalance?: boolean;
   peak?: PeakOptions;
@@ -36,6 +41,8 @@ export interface Solution {
   frequencyHz: number;
   unknowns: number;
   segments: number;
+  /** The feed gap the solve used (m). */
+  feedGapM: number;
   mesh: Mesh;
   currentRe: Float64Array;
   currentIm: Float64Array;
@@ -62,6 +69,8 @@ export function conductivityOf(conductor: Conductor): number {
 
 export interface FeedSolution {
   mesh: Mesh;
+  /** The feed gap the solve used (m). */
+  feedGapM: number;
   kRadPerM: number;
   currentRe: Float64Array;
   currentIm: Float64Array;
@@ -71,9 +80,25 @@ export interface FeedSolution {
   warnings: string[];
 }
 
+/**
+ * The right-hand side: the finite gap (feedSource.ts) at a feed between two pieces of wire; at a wire
+ * end on perfect ground (a base-fed monopole) the gap would run into the ground, so that feed stays a
+ * 1 V delta gap between the wire and the ground at the grounded end's basis function.
+ */
+export function feedExcitation(shape: Shape, mesh: Mesh, gapM: number): Float64Array {
+  if (shape.ground?.type === "perfect" && isGroundedFeed(shape)) {
+    const b = new Float64Array(mesh.unknowns);
+    b[mesh.feedBasis] = 1;
+    return b;
+  }
+  return gapExcitation(mesh, gapM, shape.feed.wire);
+}
+
 /** Currents and input impedance only: what a band sweep needs at frequencies off the design one. */
 export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolution {
-  const mesh = withGroundedEnds(buildMesh(shape, options.segmentsPerWavelength), shape); // no-op in free space
+  const gapM = options.feedGapM ?? defaultFeedGapM(shape.frequencyHz);
+  const feedRadiusM = shape.wires[shape.feed.wire].radiusM ?? shape.wireRadiusM;
+  const mesh = withGroundedEnds(buildMesh(shape, options.segmentsPerWavelength, feedSegmentM(gapM, feedRadiusM)), shape); // no-op in free space
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
   const sym = options.symmetry === false ? null : detectMirrorSymmetry(mesh); // dispatch: mirrorSolve.ts
@@ -86,19 +111,19 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
     for (let s = 0; s < mesh.segmentCount; s++) rPerM[s] = surfaceResistancePerM(shape.frequencyHz, mesh.radiusM[s], sigma);
     addConductorLoss(z, mesh, rPerM);
   }
-  const bRe = new Float64Array(mesh.unknowns);
+  const bRe = feedExcitation(shape, mesh, gapM); // V0 = 1 V over the gap (a delta gap at a grounded base)
   const bIm = new Float64Array(mesh.unknowns);
-  bRe[mesh.feedBasis] = 1; // 1 V delta gap
   const { re, im } = solveImpedanceSystem(z, sym, bRe, bIm); // even mode, LDLᵀ, or LU (mirrorSolve.ts)
-  const ir = re[mesh.feedBasis], ii = im[mesh.feedBasis];
+  const { re: ir, im: ii } = gapCurrent(bRe, re, im);
   const i2 = ir * ir + ii * ii;
   return {
     mesh,
+    feedGapM: gapM,
     kRadPerM: k,
     currentRe: re,
     currentIm: im,
     inputImpedanceOhm: { re: ir / i2, im: -ii / i2 },
-    inputPowerW: 0.5 * ir, // ½ Re(V I*) with V = 1
+    inputPowerW: 0.5 * ir, // ½ Re(Σ V_m I_m*) = ½ Re Ī with V0 = 1 V
     lossPowerW: conductorLossW(mesh, re, im, rPerM),
     warnings,
   };
@@ -120,6 +145,7 @@ export function solveShape(shape: Shape, options: SolveOptions = {}): Solution {
     frequencyHz: shape.frequencyHz,
     unknowns: mesh.unknowns,
     segments: mesh.segmentCount,
+    feedGapM: feed.feedGapM,
     mesh,
     currentRe: re,
     currentIm: im,

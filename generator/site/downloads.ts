@@ -47,6 +47,9 @@ export function shapeFileOf(entry: OkEntry) {
   };
 }
 
+/** The shape file's bytes, as the site offers them (and `bentwire shape <id>` prints them). */
+export const shapeFileText = (entry: OkEntry): string => `${JSON.stringify(shapeFileOf(entry), null, 2)}\n`;
+
 /** The geometry the export writers take. */
 export function exportShapeOf(entry: OkEntry): ExportShape {
   return {
@@ -108,7 +111,7 @@ export function downloadFiles(entry: Entry): DownloadFile[] {
   if (isOk(entry)) {
     const shape = exportShapeOf(entry);
     files.push(
-      { group: "shape", name: `${entry.id}.shape.json`, label: "shape file (loads into bentwire analyze)", mediaType: "application/json", content: `${JSON.stringify(shapeFileOf(entry), null, 2)}\n` },
+      { group: "shape", name: `${entry.id}.shape.json`, label: "shape file (loads into bentwire analyze)", mediaType: "application/json", content: shapeFileText(entry) },
       { group: "nodes", name: `${entry.id}.nodes.csv`, label: "node coordinates (CSV, metres and inches)", mediaType: "text/csv", content: nodesCsv(shape) },
       { group: "dxf", name: `${entry.id}.dxf`, label: "polyline for jig cutting (DXF, millimetres)", mediaType: "application/dxf", content: wireDxf(shape) },
       ...templateFiles(entry, shape),

@@ -221,8 +221,19 @@ export function toleranceRows(e: OkEntry): Row[] {
 /** Trust figures: how the result was checked. */
 export function checkRows(e: OkEntry): Row[] {
   const c = e.checks;
+  const u = e.figures.uncertainty;
+  const gap = e.figures.feedGapM;
   return [
     { label: "Segments per wavelength", parts: [plain(`${c.segmentsPerWavelength[0]}, checked at ${c.segmentsPerWavelength[1]}`)] },
+    ...(u ? [{
+      label: "Stated uncertainty",
+      parts: [
+        shown(`±${f.fixed(u.gainDb, 3)} dB`, "figures.uncertainty.gainDb"), plain(" gain, "),
+        shown(`±${f.fixed(u.impedancePercent, 1)} %`, "figures.uncertainty.impedancePercent", "si"),
+        plain(u.converged ? " impedance (last mesh doubling)" : " impedance (last mesh doubling; above the 0.01 dB / 1 % aim on the finest mesh allowed)"),
+      ],
+    }] : []),
+    ...(gap !== undefined ? [{ label: "Feed gap assumed", parts: [shown(`${f.fixed(gap * 1000, 1)} mm`, "figures.feedGapM", "mm"), plain(" between the terminals (λ/50), the source voltage spread evenly over it")] }] : []),
     { label: "Gain change on refinement", parts: [shown(`${f.fixed(c.gainChangeDb, 3)} dB`, "checks.gainChangeDb")] },
     { label: "Impedance change on refinement", parts: [shown(f.ohms(c.impedanceChangeOhm), "checks.impedanceChangeOhm")] },
     { label: "Energy balance error", parts: [plain(c.energyBalanceError.toExponential(1))] },

@@ -18,6 +18,18 @@ describe("bentwire analyze", () => {
     expect(r.energyBalanceError).toBeLessThan(1e-3);
   });
 
+  it("reports converged figures with their uncertainty; --segments-per-wavelength fixes one mesh", () => {
+    const r = JSON.parse(cli("analyze", example, "--json").stdout);
+    // a half-wave dipole of 2 mm wire at 145 MHz: about 1 % per doubling at 100 → 200 per λ
+    expect(r.uncertainty.impedancePercent).toBeLessThan(2);
+    expect(r.uncertainty.converged).toBe(r.uncertainty.gainDb < 0.01 && r.uncertainty.impedancePercent < 1);
+    expect(r.uncertainty.segmentsPerWavelength).toBeGreaterThan(25);
+    expect(r.feedGapM).toBeCloseTo(299792458 / r.frequencyHz / 50, 12); // λ/50
+    const fixed = JSON.parse(cli("analyze", example, "--json", "--segments-per-wavelength", "30").stdout);
+    expect(fixed.uncertainty.segmentsPerWavelength).toBe(30);
+    expect(fixed.uncertainty.comparedWithSegmentsPerWavelength).toBe(60);
+  });
+
   it("--band-mhz adds sweep, match, tolerance, pattern and checks", () => {
     const run = cli("analyze", example, "--json", "--band-mhz", "144:146", "--tolerance-samples", "8");
     expect(run.status).toBe(0);

@@ -29,15 +29,17 @@ describe("solver invariants", () => {
     expect(worst).toBeLessThanOrEqual(1e-12 * scale);
   });
 
-  it("mirror-symmetric shape gives mirror-symmetric currents (to quadrature accuracy, 1e-5)", () => {
+  it("mirror-symmetric shape gives mirror-symmetric currents (to quadrature accuracy, 3e-5)", () => {
     // the two halves are integrated with the outer and inner variables swapped, so they agree to
-    // the accuracy of the near-pair quadrature rather than to rounding
+    // the accuracy of the near-pair quadrature rather than to rounding; the graded feed mesh
+    // (segments from 1/8 to 1 of the others, mesh.ts) makes long–short near pairs, whose outer
+    // 10-point rule is the least accurate: 1.5e-5 on this shape at 25 per λ, 3e-8 at 50 per λ
     const s = solveShape(bentShape());
     const n = s.unknowns;
     const peak = Math.max(...s.currentRe.map((re, i) => Math.hypot(re, s.currentIm[i])));
     for (let i = 0; i < n; i++) {
       const d = Math.hypot(s.currentRe[i] - s.currentRe[n - 1 - i], s.currentIm[i] - s.currentIm[n - 1 - i]);
-      expect(d / peak).toBeLessThan(1e-5);
+      expect(d / peak).toBeLessThan(3e-5);
     }
   });
 
