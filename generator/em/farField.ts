@@ -53,10 +53,12 @@ export function createFarFieldPlan(mesh: Mesh, re: Float64Array, im: Float64Arra
     if (Math.abs(z0) > 1e-12 || Math.abs(z0 + segVec[3 * s + 2]) > 1e-12) planarXy = false;
   }
   const nodeCount = xyz.length / 3;
-  // runs: the segments of one piece of one wire share direction and length, their nodes are consecutive
+  // runs: consecutive segments of one piece of one wire with the same length (the feed's finer
+  // segments, mesh.ts, start runs of their own), so their nodes are equally spaced
   const runFirst: number[] = [], runCount: number[] = [], runStep: number[] = [];
   for (let s = 0; s < ns; s++) {
-    const sameRun = s > 0 && mesh.wireOf[s - 1] === mesh.wireOf[s] && mesh.pieceOf[s - 1] === mesh.pieceOf[s];
+    const sameRun = s > 0 && mesh.wireOf[s - 1] === mesh.wireOf[s] && mesh.pieceOf[s - 1] === mesh.pieceOf[s]
+      && Math.abs(mesh.lengthM[s] - mesh.lengthM[s - 1]) <= 1e-12 * mesh.lengthM[s];
     if (sameRun) { runCount[runCount.length - 1] += 1; continue; }
     runFirst.push(segStartNode[s]);
     runCount.push(2);

@@ -2,7 +2,7 @@
 // converges as the mesh is refined. Induced-EMF impedance of a half-wave dipole: 73.1 + j42.5 Ω
 // (Balanis, Antenna Theory, 3rd ed., §8.5, eq. 8-61: sinusoidal current, infinitely thin wire).
 import { describe, expect, it } from "vitest";
-import { buildMesh, fillImpedance, solveComplex, solveFeed } from "../../generator/em/index.js";
+import { buildMesh, fillImpedance, solveComplex, solveFeed, validateShape } from "../../generator/em/index.js";
 import { feedGapM, feedSegmentM, gapCurrent, gapExcitation } from "../../generator/em/feedSource.js";
 import { straightDipole, vee } from "../helpers/shapes.js";
 
@@ -33,7 +33,10 @@ describe("half-wave dipole (Balanis §8.5, eq. 8-61: 73.1 + j42.5 Ω)", () => {
   it("tends to the induced-EMF value as the wire thins", () => {
     const ref = { re: 73.1, im: 42.5 };
     const d = [1e-5, 1e-7, 1e-9, 1e-12].map((a) => {
-      const z = solveFeed(straightDipole(0.5, a), { segmentsPerWavelength: 100 }).inputImpedanceOhm;
+      // at λ = 1 km, so the thinnest radius (1e-12 λ = 1 nm) stays inside the shape file's bounds
+      const d0 = straightDipole(0.5, 1e-3);
+      const km = validateShape({ ...d0, frequencyHz: d0.frequencyHz / 1000, wireRadiusM: a * 1000, wires: d0.wires.map((w) => ({ pointsM: w.pointsM.map((p) => p.map((c) => c * 1000) as [number, number, number]) })) });
+      const z = solveFeed(km, { segmentsPerWavelength: 100 }).inputImpedanceOhm;
       return Math.hypot(z.re - ref.re, z.im - ref.im);
     });
     for (let i = 1; i < d.length; i++) expect(d[i]).toBeLessThan(d[i - 1]);
