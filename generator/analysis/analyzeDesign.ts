@@ -1,7 +1,7 @@
 // Everything a builder needs to know about one shape, in one pure function: the design-frequency
 // figures, a band sweep, a feed-match suggestion, a tolerance study, pattern figures and cuts, and
 // the trust figures. The CLI's `analyze --band-mhz` and the catalog both call this.
-import { solveShape, type Shape } from "../em/index.js";
+import { findPeak, solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { DEG_PER_RAD } from "../units.js";
 import { suggestMatch, type MatchSuggestion } from "./feedMatch.js";
@@ -85,7 +85,7 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
     },
     sweep,
     match: suggestMatch(sweep, shape.frequencyHz, s.inputImpedanceOhm),
-    tolerance: toleranceStudy(shape, s.peakGainDbi, { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm }),
+    tolerance: toleranceStudy(shape, s.peakGainDbi, { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm }, findPeak(s.farField).maxima),
     pattern: {
       beamwidthAlongThetaDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongTheta),
       beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongPhi),
