@@ -91,7 +91,7 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions): Analysis 
       beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongPhi),
       frontToBackDb: frontToBackDb(s.farField, theta, phi),
       polarization,
-      words: describeLobe(theta, phi, polarization.tiltDeg),
+      words: describeLobe(shape.wires[shape.feed.wire].pointsM, shape.feed.vertex, theta, phi, polarization.tiltDeg),
       cutAlongThetaDbi: cutGainsDbi(s.farField, cuts.alongTheta, s.inputPowerW, CUT_STEP_DEG),
       cutAlongPhiDbi: cutGainsDbi(s.farField, cuts.alongPhi, s.inputPowerW, CUT_STEP_DEG),
       gridDbi: gainGridDbi(s.farField, s.inputPowerW, GRID_THETA_STEP_DEG, GRID_PHI_STEP_DEG),
