@@ -16,8 +16,8 @@ export function infeasibleMessage(outcome: DesignOutcome, r: DesignRequest, refe
   const [lo, hi] = bandOf(r);
   const pieces = `${r.piecesPerArm} piece${r.piecesPerArm === 1 ? "" : "s"} per arm`;
   const asked = r.variant === "direct-feed"
-    ? `Asked: a ${r.lengthWl} λ wire (${lengthText(wireM)}) bent in ${pieces}, fed straight from a ${r.lineImpedanceOhm} Ω line with SWR at most ${r.swrLimit} from ${mhz(lo)} to ${mhz(hi)}.`
-    : `Asked: a ${r.lengthWl} λ wire (${lengthText(wireM)}) bent in ${pieces} for the most gain at ${mhz(r.frequencyHz)}.`;
+    ? `Asked: a ${r.lengthWl} λ wire (${lengthText(wireM)}) with ${pieces}, fed straight from a ${r.lineImpedanceOhm} Ω line with SWR at most ${r.swrLimit} from ${mhz(lo)} to ${mhz(hi)}.`
+    : `Asked: a ${r.lengthWl} λ wire (${lengthText(wireM)}) with ${pieces} for the most gain at ${mhz(r.frequencyHz)}.`;
   const { maxSwr, reasons } = outcome.evaluation;
   const misses = reasons.filter((x) => !x.startsWith("SWR reaches"));
   if (maxSwr !== null && maxSwr > r.swrLimit) {

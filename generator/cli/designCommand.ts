@@ -1,5 +1,6 @@
 // `design`: finds the bent-arm shape with the most gain for a frequency, wire length and number of
 // pieces, and reports it like `analyze` does, plus the parameters and the optimizer's record.
+import { infeasibleMessage } from "../catalog/infeasibleMessage.js";
 import { SingleBar } from "cli-progress";
 import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
@@ -65,13 +66,14 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
+  const message = outcome.status === "ok" ? outcome.message : infeasibleMessage(outcome, request, false, 0);
   const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   const parameters = parametersReport(outcome.x, request);
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
   const result = {
     status: outcome.status,
-    message: outcome.message,
+    message,
     variant: request.variant,
     ...summary,
     maxSwrInBand: outcome.evaluation.maxSwr,
@@ -91,7 +93,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     rows.push([String(i + 1), fixed(len, 4), turn]);
   });
   const lines = [
-    `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
+    `status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
     summaryText(shape.name, summary),
     "",
     "right arm, from the feed outward (the left arm is its mirror image):",

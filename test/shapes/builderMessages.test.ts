@@ -75,7 +75,7 @@ describe("infeasible catalog cells", () => {
   it("a direct-feed 1 λ cell: the asked SWR, how far above it, why, and what to try", () => {
     const r = parseDesignRequest({ frequencyHz: 145e6, lengthWl: 1, piecesPerArm: 2, wireDiameterM: 2e-3, conductor: "copper", variant: "direct-feed", bandHz: [144e6, 146e6] });
     expect(infeasibleMessage(outcome({ score: 10, gainDbi: 3, maxSwr: 25.87, reasons: ["SWR reaches 25.87 in the band, above 2"] }), r, true, 0.03)).toBe(
-      "Asked: a 1 λ wire (2.068 m) bent in 2 pieces per arm, fed straight from a 50 Ω line with SWR at most 2 from 144 MHz to 146 MHz. " +
+      "Asked: a 1 λ wire (2.068 m) with 2 pieces per arm, fed straight from a 50 Ω line with SWR at most 2 from 144 MHz to 146 MHz. " +
       "The closest shape found: SWR reaches 25.87 in the band, 23.87 above the limit 2 (12.9 times it). " +
       "No shape of this length and piece count met them in the general search either (done once for all bands, on a 3 % wide band, and scaled to each band). " +
       "Try instead: the most-gain design of this wire with a matching network (a centre-fed 1 λ wire has a feed impedance of kilohms), or a 1.5 λ or 2.5 λ wire fed straight.",
@@ -85,7 +85,7 @@ describe("infeasible catalog cells", () => {
     const r = parseDesignRequest({ frequencyHz: C, lengthWl: 1.5, piecesPerArm: 3, wireDiameterM: 2e-3, conductor: "perfect" });
     const message = infeasibleMessage(outcome({ score: 10, gainDbi: null, maxSwr: null, reasons: reasons([0.1, 0, 0, 0.3, 0.3]) }), r, false, 0.03);
     expect(message).toBe(
-      "Asked: a 1.5 λ wire (1.500 m) bent in 3 pieces per arm for the most gain at 299.792 MHz. " +
+      "Asked: a 1.5 λ wire (1.500 m) with 3 pieces per arm for the most gain at 299.792 MHz. " +
       "The closest shape found: the arms meet at 11.5° at the feed, 18.5° under the 30° that leaves room for the feed and balun; open the arms wider. " +
       "Try instead: fewer pieces per arm or another wire length.",
     );
