@@ -5,7 +5,7 @@
 // settle at the design frequency and both band edges; the sweep, the pattern and the match use that
 // mesh. The tolerance Monte Carlo stays on the starting mesh (64 solves of the finest mesh would
 // cost too much) and compares its samples with that mesh's own nominal gain.
-import { DEFAULT_SEGMENTS_PER_WAVELENGTH, type Shape } from "../em/index.js";
+import { DEFAULT_SEGMENTS_PER_WAVELENGTH, findPeak, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { DEG_PER_RAD } from "../units.js";
 import { feedAnalysis, type FeedAnalysis } from "./feedAnalysis.js";
@@ -111,7 +111,7 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: Sol
   // the bent copies run on the starting mesh, against that mesh's own nominal (their spread is what counts)
   const baseShape = { ...shape, segmentsPerWavelength: baseSpw };
   const toleranceOptions = { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm };
-  const tolerance = toleranceStudy(baseShape, base.peakGainDbi, toleranceOptions);
+  const tolerance = toleranceStudy(baseShape, base.peakGainDbi, toleranceOptions, findPeak(base.farField).maxima); // warm-started peaks
   return {
     design: {
       frequencyHz: shape.frequencyHz,
@@ -132,7 +132,7 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: Sol
       beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongPhi),
       frontToBackDb: frontToBackDb(s.farField, theta, phi),
       polarization,
-      words: describeLobe(theta, phi, polarization.tiltDeg),
+      words: describeLobe(shape.wires[shape.feed.wire].pointsM, shape.feed.vertex, theta, phi, polarization.tiltDeg),
       cutAlongThetaDbi: cutGainsDbi(s.farField, cuts.alongTheta, s.inputPowerW, CUT_STEP_DEG),
       cutAlongPhiDbi: cutGainsDbi(s.farField, cuts.alongPhi, s.inputPowerW, CUT_STEP_DEG),
       gridDbi: gainGridDbi(s.farField, s.inputPowerW, GRID_THETA_STEP_DEG, GRID_PHI_STEP_DEG),

@@ -5,8 +5,12 @@
 // plane), or about x for a piece along z. Reported: the 5th, 50th and 95th percentiles (linear
 // interpolation between order statistics, Hyndman & Fan 1996 definition 7) of gain and SWR; a design
 // is fragile when its 5th-percentile gain falls more than 0.5 dB below nominal.
+// Each copy's peak search is warm-started from the nominal shape's distinct maxima and their mirror
+// images (a copy's lobe is close to one of them, but the two mirror-twin lobes of a symmetric shape
+// swap places as the copy's errors tip the balance, so both twins are starts).
 import { InputError } from "../errors.js";
 import { solveShape, type Shape, type Vec3 } from "../em/index.js";
+import { DEFAULT_PEAK_OPTIONS, type Direction } from "../em/pattern.js";
 import { createRng, type Rng } from "../optimize/rng.js";
 import { RAD_PER_DEG } from "../units.js";
 import { swr } from "./swr.js";
@@ -80,7 +84,11 @@ export function perturbShape(shape: Shape, rng: Rng, o: ToleranceOptions): Shape
   return { ...shape, wires };
 }
 
-export function toleranceStudy(shape: Shape, nominalGainDbi: number, options: ToleranceOptions): ToleranceStudy {
+/**
+ * peakStarts: the nominal shape's peak maxima (findPeak(...).maxima) for a warm-started peak search
+ * in every copy; without them each copy searches the whole sphere.
+ */
+export function toleranceStudy(shape: Shape, nominalGainDbi: number, options: ToleranceOptions, peakStarts?: readonly Direction[]): ToleranceStudy {
   if (!(Number.isInteger(options.samples) && options.samples > 0)) {
     throw new InputError(`tolerance: samples must be a whole number above 0 (got ${options.samples})`);
   }
@@ -94,7 +102,7 @@ export function toleranceStudy(shape: Shape, nominalGainDbi: number, options: To
   for (let i = 0; i < options.samples; i++) {
     const copy = perturbShape(shape, rng, options);
     try {
-      const s = solveShape(copy);
+      const s = solveShape(copy, peakStarts?.length ? { peak: { ...DEFAULT_PEAK_OPTIONS, starts: peakStarts } } : {});
       gains.push(s.peakGainDbi);
       swrs.push(swr(s.inputImpedanceOhm, options.lineImpedanceOhm));
     } catch (err) {

@@ -15,6 +15,7 @@ import { parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { SOLVER_VERSION } from "../em/index.js";
 import { SPEED_OF_LIGHT_M_PER_S } from "../units.js";
 import { buildEntry, publishedShapeOf } from "./entryBuild.js";
+import { infeasibleMessage } from "./infeasibleMessage.js";
 import type { Entry } from "./entrySchema.js";
 import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
@@ -128,8 +129,9 @@ export function computeEntry(grid: Grid, cell: CellRequest, reference: Reference
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
     outcome = designBentArm(request, { start: reference.x, polishOnly: false });
     startedFrom = "search";
-  } else if (outcome.status !== "ok") {
-    outcome = { ...outcome, message: `${outcome.message}; the search in wavelength units over a ${grid.reference.relativeBandwidth * 100} % band found no such shape either` };
+  }
+  if (outcome.status !== "ok") {
+    outcome = { ...outcome, message: infeasibleMessage(outcome, request, reference.status !== "ok", grid.reference.relativeBandwidth) };
   }
   const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
   const analysis = outcome.status === "ok"

@@ -1,5 +1,6 @@
 // `design`: finds the bent-arm shape with the most gain for a frequency, wire length and number of
 // pieces, and reports it like `analyze` does, plus the parameters and the optimizer's record.
+import { infeasibleMessage } from "../catalog/infeasibleMessage.js";
 import { SingleBar } from "cli-progress";
 import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
 import { designResult, overGroundReport, parametersReport } from "../design/designResult.js";
@@ -70,7 +71,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   bar?.stop();
   const feasible = outcome.status === "ok";
   if (!feasible) process.exitCode = INFEASIBLE_EXIT;
-  const message = forDesign(outcome.message);
+  const message = forDesign(outcome.status === "ok" ? outcome.message : infeasibleMessage(outcome, request, false, 0));
   let result;
   try {
     result = designResult(request, outcome, message);

@@ -1,14 +1,16 @@
 // Thin-wire validity of a mesh. The reduced kernel assumes segments much longer than the wire
 // radius and wires that do not come close (Gibson, ch. 4, "thin-wire approximation": error grows
-// as L/a falls below a few). Refused: segments shorter than the radius; segments that touch or
-// cross (axis distance below the sum of radii). Warned: segments shorter than 4 radii; segments
-// closer than 4 radii that do not share a node.
+// as L/a falls below a few). Refused: segments shorter than the radius (their own message: the
+// piece, its segments, the shortfall and what to change); segments that touch or cross (axis
+// distance below the sum of radii). Warned: segments shorter than 4 radii; segments closer than 4
+// radii. Two segments of one wire joined by less wire than the sum of their radii (neighbours,
+// or neighbours but for very short segments between them) are close because the wire runs on,
+// not because it comes back: they are neither a crossing nor a warning of one.
 import { InputError } from "../errors.js";
 import { segmentDistanceM } from "../geometry.js";
-import type { Mesh } from "./mesh.js";
+import { lengthText } from "../lengthText.js";
+import { MIN_SEGMENTS_PER_PIECE, type Mesh } from "./mesh.js";
 import type { Vec3 } from "./shapeFile.js";
-
-const fmt = (v: number) => Number(v.toPrecision(3));
 
 /** Both ends of every mesh segment, for distance checks. */
 function segmentEnds(mesh: Mesh): [Vec3, Vec3][] {
@@ -21,34 +23,52 @@ function segmentEnds(mesh: Mesh): [Vec3, Vec3][] {
   return ends;
 }
 
-const where = (mesh: Mesh, s: number) => `wires[${mesh.wireOf[s]}] piece ${mesh.pieceOf[s]}`;
+/** "wires[w] piece p (pointsM[p] to pointsM[p+1])": the names a shape file uses. */
+const where = (mesh: Mesh, s: number) => `wires[${mesh.wireOf[s]}] piece ${mesh.pieceOf[s]} (pointsM[${mesh.pieceOf[s]}] to pointsM[${mesh.pieceOf[s] + 1}])`;
+
+function segmentsOfPiece(mesh: Mesh, s: number): number {
+  let n = 0;
+  for (let t = 0; t < mesh.segmentCount; t++) if (mesh.wireOf[t] === mesh.wireOf[s] && mesh.pieceOf[t] === mesh.pieceOf[s]) n++;
+  return n;
+}
+
+function shortSegmentMessage(mesh: Mesh, s: number): string {
+  const len = mesh.lengthM[s], a = mesh.radiusM[s], n = segmentsOfPiece(mesh, s);
+  const fewer = n > MIN_SEGMENTS_PER_PIECE ? "use fewer segments per wavelength, " : "";
+  return `shape: ${where(mesh, s)} is ${lengthText(n * len)} long and is cut into ${n} segments of ${lengthText(len)}, ` +
+    `${lengthText(a - len)} shorter than the wire radius ${lengthText(a)} (the thin-wire model needs segments longer than the radius); ` +
+    `${fewer}make the piece at least ${lengthText(n * a)} long, or use a wire of radius under ${lengthText(len)}`;
+}
 
 /** Throws InputError for shapes the solver must refuse; returns warnings for doubtful ones. */
 export function checkMesh(mesh: Mesh): string[] {
   const warnings = new Set<string>();
   for (let s = 0; s < mesh.segmentCount; s++) {
     const len = mesh.lengthM[s], a = mesh.radiusM[s];
-    if (len < a) {
-      throw new InputError(
-        `shape: ${where(mesh, s)}: segments of ${fmt(len)} m are shorter than the wire radius ${fmt(a)} m; lengthen the piece or use fewer segments per wavelength`,
-      );
+    if (len < a) throw new InputError(shortSegmentMessage(mesh, s));
+    if (len < 4 * a) {
+      warnings.add(`${where(mesh, s)}: segments of ${lengthText(len)} are under 4 wire radii (${lengthText(4 * a)}); the thin-wire model loses accuracy: use fewer segments per wavelength or a longer piece`);
     }
-    if (len < 4 * a) warnings.add(`${where(mesh, s)}: segments of ${fmt(len)} m are under 4 wire radii; the thin-wire model loses accuracy`);
   }
+  // wire run between segments of one wire: the lengths strictly between p and q (segments of a
+  // wire are consecutive in the mesh)
+  const runM = new Float64Array(mesh.segmentCount + 1);
+  for (let s = 0; s < mesh.segmentCount; s++) runM[s + 1] = runM[s] + mesh.lengthM[s];
   const ends = segmentEnds(mesh);
   for (let p = 0; p < mesh.segmentCount; p++) {
     for (let q = p + 1; q < mesh.segmentCount; q++) {
-      const sameWire = mesh.wireOf[p] === mesh.wireOf[q];
-      if (sameWire && q === p + 1) continue; // neighbours share a node
-      const dist = segmentDistanceM(ends[p][0], ends[p][1], ends[q][0], ends[q][1]);
       const touch = mesh.radiusM[p] + mesh.radiusM[q];
+      const between = mesh.wireOf[p] === mesh.wireOf[q] ? runM[q] - runM[p + 1] : Infinity;
+      if (between < touch) continue; // the wire runs on from one to the other
+      const dist = segmentDistanceM(ends[p][0], ends[p][1], ends[q][0], ends[q][1]);
       if (dist < touch) {
         throw new InputError(
-          `shape: ${where(mesh, p)} and ${where(mesh, q)} touch or cross (${fmt(dist)} m apart, wire radii sum to ${fmt(touch)} m); wires must not intersect`,
+          `shape: ${where(mesh, p)} and ${where(mesh, q)} touch or cross: their axes come within ${lengthText(dist)}, ` +
+          `${lengthText(touch - dist)} less than the ${lengthText(touch)} the two wire radii need; move them apart (wires must not intersect)`,
         );
       }
-      if (dist < 2 * touch) {
-        warnings.add(`${where(mesh, p)} and ${where(mesh, q)} come within ${fmt(dist)} m, under 4 wire radii; the thin-wire model loses accuracy`);
+      if (dist < 2 * touch && between >= 2 * touch) {
+        warnings.add(`${where(mesh, p)} and ${where(mesh, q)} come within ${lengthText(dist)}, under 4 wire radii (${lengthText(2 * touch)}); the thin-wire model loses accuracy`);
       }
     }
   }

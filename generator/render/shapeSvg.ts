@@ -2,11 +2,12 @@
 // axes. With dimensions it adds piece lengths, the turn at each bend (drawn from the dashed
 // straight-on direction), the angle between the arms at the feed, a scale bar and small x/y axes;
 // labels are placed clear of the wire and of each other (labelPlacer.ts). The main lobe is an
-// arrow along the peak direction projected onto the x–y plane, (sin θ cos φ, sin θ sin φ), with its
-// mirror twin when it is off the symmetry axis (the shape is symmetric about x = 0); when
-// |cos θ| > 0.7 the lobe leaves the plane and a circled dot (toward the viewer, +z) or circled
-// cross (away, −z) is drawn instead.
+// arrow along the peak direction projected onto the x–y plane, with its mirror twin when the shape
+// has a mirror line and the lobe lies off it; when the lobe rises more than 45° from the wire plane
+// a circled dot (toward the viewer, +z) or circled cross (away, −z) is drawn instead. Both come from
+// analysis/lobeWords.ts lobeLayout, as the lobe's words do, so drawing and words agree.
 import type { Entry } from "../catalog/entrySchema.js";
+import { lobeLayout } from "../analysis/lobeWords.js";
 import { DEG_PER_RAD, RAD_PER_DEG } from "../units.js";
 import { okParts } from "./entryParts.js";
 import { labelAt, Placer, type Candidate } from "./labelPlacer.js";
@@ -62,7 +63,8 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
   // Main lobe.
   const th = figures.peakDirection.thetaDeg * RAD_PER_DEG, ph = figures.peakDirection.phiDeg * RAD_PER_DEG;
   const cosT = Math.cos(th), cx = boxW / 2, cy = boxH / 2;
-  if (Math.abs(cosT) > 0.7) {
+  const layout = lobeLayout(shape.pointsM, fv, th, ph);
+  if (layout.outOfPlane) {
     const s: Pt = [cx, -34 * k], r = 13 * k, toward = cosT > 0, q = r * 0.6;
     const mark = toward
       ? el("circle", { cx: s[0], cy: s[1], r: 3.6 * k, fill: PALETTE.lobe })
@@ -72,9 +74,9 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     placer.blockBox({ x0: s[0] - r, y0: s[1] - r, x1: s[0] + r, y1: s[1] + r });
     if (dims) labels.push([labelAt([s[0] + r, s[1]], [1, 0], 8, `main lobe out of the page, ${toward ? "toward you (+z)" : "away from you (−z)"}`, FONT.caption)]);
   } else {
-    const u0 = unit(Math.sin(th) * Math.cos(ph), -Math.sin(th) * Math.sin(ph));
-    // the shape is mirror-symmetric about the y axis, so a lobe off that axis has a twin
-    const twins: Pt[] = Math.abs(u0[0]) > 0.05 ? [u0, [-u0[0], u0[1]]] : [u0];
+    // drawing coordinates: x to the right, y down (the page's y is −y)
+    const u0 = unit(layout.inPlane[0], -layout.inPlane[1]);
+    const twins: Pt[] = layout.twin ? [u0, unit(layout.twin[0], -layout.twin[1])] : [u0];
     const len = dims ? 72 : 120, head = 15 * k;
     twins.forEach((u, i) => {
       const tx = Math.abs(u[0]) > 1e-9 ? boxW / 2 / Math.abs(u[0]) : Infinity, ty = Math.abs(u[1]) > 1e-9 ? boxH / 2 / Math.abs(u[1]) : Infinity;
@@ -90,7 +92,8 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
         const tilt = 90 - figures.peakDirection.thetaDeg;
         if (Math.abs(tilt) >= 3) tiltNote = `Main lobe tilted ${Math.abs(tilt).toFixed(0)}° out of the page, ${tilt > 0 ? "toward you (+z)" : "away from you (−z)"}; the arrow shows its part in the page.`;
         const phi = (Math.round(figures.peakDirection.phiDeg) % 360 + 360) % 360;
-        const words = twins.length > 1 ? `main lobes (φ ${phi}° and ${(540 - phi) % 360}°, mirror twins)` : `main lobe (φ ${phi}°)`;
+        const twinPhi = layout.twin ? (Math.round(Math.atan2(layout.twin[1], layout.twin[0]) * DEG_PER_RAD) % 360 + 360) % 360 : 0;
+        const words = layout.twin ? `main lobes (φ ${phi}° and ${twinPhi}°, mirror twins)` : `main lobe (φ ${phi}°)`;
         labels.push(around(s1, [u, rot(u, 90), rot(u, -90)], 10, words));
       }
     });

@@ -12,6 +12,7 @@
 // back into the feasible region (Deb, "An efficient constraint handling method for genetic
 // algorithms", CMAME 186, 2000: feasible beats infeasible, less violation beats more).
 import { segmentDistanceM } from "../geometry.js";
+import { lengthText } from "../lengthText.js";
 import { RAD_PER_DEG } from "../units.js";
 import { pieceLengthsM, wirePointsM, type BentArmParameters, type BentArmSpec } from "./bentArm.js";
 
@@ -53,18 +54,22 @@ export function constraintViolation(
   pieceLengthsM(p, spec).forEach((len, i) => {
     if (len < minPieceM) {
       total += (minPieceM - len) / wavelengthM;
-      reasons.push(`piece ${i + 1} is ${(len / wavelengthM).toFixed(3)} λ, under the minimum ${limits.minPieceWl} λ`);
+      reasons.push(
+        `piece ${i + 1} of each arm (counted from the feed) is ${pair(len, minPieceM, wavelengthM)}, ${lengthText(minPieceM - len)} short of the minimum ${lengthText(minPieceM)} (${limits.minPieceWl} λ) a piece needs to be bent by hand and modelled; try fewer pieces per arm or a longer wire`,
+      );
     }
   });
   const armAngle = 2 * p.firstAngleRad;
   if (armAngle < limits.minArmAngleRad) {
     total += limits.minArmAngleRad - armAngle;
-    reasons.push(`arms meet at ${(armAngle / RAD_PER_DEG).toFixed(1)}°, under the minimum ${(limits.minArmAngleRad / RAD_PER_DEG).toFixed(0)}°`);
+    const minDeg = limits.minArmAngleRad / RAD_PER_DEG, deg = armAngle / RAD_PER_DEG;
+    reasons.push(`the arms meet at ${deg.toFixed(1)}° at the feed, ${degText(minDeg - deg)} under the ${minDeg.toFixed(0)}° that leaves room for the feed and balun; open the arms wider`);
   }
   p.bendAnglesRad.forEach((b, i) => {
     if (Math.abs(b) > limits.maxBendRad) {
       total += Math.abs(b) - limits.maxBendRad;
-      reasons.push(`bend ${i + 1} turns ${(b / RAD_PER_DEG).toFixed(1)}°, beyond ±${(limits.maxBendRad / RAD_PER_DEG).toFixed(0)}°`);
+      const maxDeg = limits.maxBendRad / RAD_PER_DEG, deg = b / RAD_PER_DEG;
+      reasons.push(`bend ${i + 1} of each arm (counted from the feed) turns ${deg.toFixed(1)}°, ${degText(Math.abs(deg) - maxDeg)} beyond the ±${maxDeg.toFixed(0)}° that can be bent repeatably (a sharper turn folds the wire back on itself); try fewer pieces per arm`);
     }
   });
   if (total > 0) return { total, reasons }; // clearance is meaningless for a malformed shape
@@ -75,12 +80,23 @@ export function constraintViolation(
       const d = segmentDistanceM(points[i], points[i + 1], points[j], points[j + 1]);
       if (d < clearanceM) {
         total += (clearanceM - d) / wavelengthM;
-        reasons.push(`pieces ${i + 1} and ${j + 1} (tip to tip) come within ${(d / wavelengthM).toFixed(3)} λ, under the clearance ${(clearanceM / wavelengthM).toFixed(3)} λ`);
+        reasons.push(
+          `pieces ${i + 1} and ${j + 1} (counted from one tip to the other) come within ${pair(d, clearanceM, wavelengthM)} of each other, ${lengthText(clearanceM - d)} closer than the ${lengthText(clearanceM)} clearance that keeps them from coupling like a feed line; try fewer pieces per arm or a shorter wire`,
+        );
       }
     }
   }
   return { total, reasons };
 }
+
+/** "x mm (y λ)", with λ digits enough to tell the value from the limit it is compared with. */
+function pair(valueM: number, limitM: number, wavelengthM: number): string {
+  const gap = Math.abs(limitM - valueM) / wavelengthM;
+  const decimals = Math.min(9, Math.max(3, Math.ceil(-Math.log10(gap))));
+  return `${lengthText(valueM)} (${(valueM / wavelengthM).toFixed(decimals)} λ)`;
+}
+
+const degText = (deg: number): string => `${deg >= 0.1 ? deg.toFixed(1) : deg.toPrecision(2)}°`;
 
 /** Box bounds of x = [φ1, β…, u…] that no feasible shape lies outside of. */
 export function parameterBounds(spec: BentArmSpec, limits: BentArmLimits, wavelengthM: number): { lower: number[]; upper: number[] } {

