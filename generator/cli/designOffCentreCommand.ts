@@ -4,7 +4,7 @@
 import { designOffCentre, offCentreShapeOf } from "../design/designOffCentre.js";
 import type { DesignRequest } from "../design/request.js";
 import { OFF_CENTRE_FEED_NOTE } from "../analysis/feedOptionsStock.js";
-import { solveShape } from "../em/index.js";
+import { convergedSolution } from "../analysis/converged.js";
 import { writeFileAtomic } from "../fsAtomic.js";
 import { armLengthsM, armPieceLengthsM, unpackOffCentre } from "../shapes/offCentre.js";
 import { offCentreSpecOf } from "../design/offCentreObjective.js";
@@ -36,7 +36,9 @@ export function offCentreParametersReport(x: number[], r: DesignRequest) {
 export async function designOffCentreCommand(request: DesignRequest, flags: { json?: boolean; out?: string }): Promise<void> {
   const outcome = designOffCentre(request);
   const shape = { ...offCentreShapeOf(outcome.x, request), name: `${request.lengthWl} λ wire fed off centre, ${request.piecesPerArm === 1 ? "1 piece" : `${request.piecesPerArm} pieces`} per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
-  const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
+  // the figures converged as `analyze` reports them (the search itself runs on the starting mesh)
+  const { solution, refinement } = convergedSolution(shape);
+  const summary = solutionSummary(solution, refinement);
   const parameters = offCentreParametersReport(outcome.x, request);
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
   const result = {

@@ -16,7 +16,8 @@
 // keeps growing as its segments shrink.
 // The gap: g = λ0/50 at the design frequency (4.1 cm on a 145 MHz design), a fixed length in metres
 // for every other frequency of a sweep. The mesh resolves it (mesh.ts: segments at the feed no
-// longer than g/4, nor shorter than 4 wire radii, the thin-wire limit of geometryChecks.ts).
+// longer than g/4, or 8 radii on a thick wire, and so never shorter than 4 radii, the thin-wire
+// limit of geometryChecks.ts).
 import { InputError } from "../errors.js";
 import { wavelengthM } from "../units.js";
 import type { Mesh } from "./mesh.js";
@@ -27,14 +28,23 @@ export const FEED_GAP_WL = 1 / 50;
 /** The gap of a design at `designFrequencyHz` (m): pass it unchanged when solving other frequencies. */
 export const feedGapM = (designFrequencyHz: number): number => FEED_GAP_WL * wavelengthM(designFrequencyHz);
 
-/** Longest segment allowed at the feed: g/4, but at least 4 radii (thin-wire limit). */
-export const feedSegmentM = (gapM: number, radiusM: number): number => Math.max(gapM / 4, 4 * radiusM);
+/**
+ * Longest segment allowed at the feed: g/4, or 8 radii on a thick wire. The mesh halves the feed's
+ * segments until they are no longer than this, so they end between half of it and it: never under
+ * 4 radii (the thin-wire limit), which also keeps the two arms' segments apart at a 30° apex.
+ */
+export const feedSegmentM = (gapM: number, radiusM: number): number => Math.max(gapM / 4, 8 * radiusM);
 
-/** Excitation vector (real; V0 = 1 V) of a uniform field over the gap, tested against Λ_m. */
-export function gapExcitation(mesh: Mesh, gapM: number, feedWire: number, out = new Float64Array(mesh.unknowns)): Float64Array {
+/**
+ * Excitation vector (real; V0 = 1 V) of a uniform field over the gap, tested against Λ_m.
+ * `grounded`: the feed is at a wire end on perfect ground (a base-fed monopole); the gap is then the
+ * half of the dipole gap that lies on the real wire, g/2 long, carrying the same field 2·V0/g as the
+ * image-theory dipole driven with 2·V0, so V0 is the wire-to-ground voltage and Z_in = Z_dipole/2.
+ */
+export function gapExcitation(mesh: Mesh, gapM: number, feedWire: number, out = new Float64Array(mesh.unknowns), grounded: "start" | "end" | null = null): Float64Array {
   if (!(gapM > 0)) throw new Error(`feed gap must be positive (got ${gapM} m)`);
   out.fill(0);
-  const e0 = 1 / gapM; // V/m for V0 = 1 V
+  const e0 = grounded ? 2 / gapM : 1 / gapM; // V/m for V0 = 1 V
   // arc length of the feed node: the end of the segment whose rising half is the feed basis
   let arc = 0;
   let feedArc = NaN;
@@ -43,9 +53,10 @@ export function gapExcitation(mesh: Mesh, gapM: number, feedWire: number, out = 
     if (mesh.wireOf[s] !== feedWire) continue;
     segArc[s] = arc;
     arc += mesh.lengthM[s];
+    if (Number.isNaN(feedArc) && mesh.basisAtStart[s] === mesh.feedBasis) feedArc = segArc[s]; // a grounded start
     if (mesh.basisAtEnd[s] === mesh.feedBasis) feedArc = arc;
   }
-  const lo = feedArc - gapM / 2, hi = feedArc + gapM / 2;
+  const lo = grounded === "start" ? feedArc : feedArc - gapM / 2, hi = grounded === "end" ? feedArc : feedArc + gapM / 2;
   if (lo < 0 || hi > arc) {
     throw new InputError(`shape: the feed gap (${Number(gapM.toPrecision(3))} m, λ/50) runs past an end of wires[${feedWire}]; the wire must extend at least half the gap either side of the feed`);
   }

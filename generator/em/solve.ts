@@ -81,17 +81,12 @@ export interface FeedSolution {
 }
 
 /**
- * The right-hand side: the finite gap (feedSource.ts) at a feed between two pieces of wire; at a wire
- * end on perfect ground (a base-fed monopole) the gap would run into the ground, so that feed stays a
- * 1 V delta gap between the wire and the ground at the grounded end's basis function.
+ * The right-hand side: the finite gap (feedSource.ts) at the feed; at a wire end on perfect ground
+ * (a base-fed monopole) the half of it on the real wire, with 1 V between the wire and the ground.
  */
 export function feedExcitation(shape: Shape, mesh: Mesh, gapM: number): Float64Array {
-  if (shape.ground?.type === "perfect" && isGroundedFeed(shape)) {
-    const b = new Float64Array(mesh.unknowns);
-    b[mesh.feedBasis] = 1;
-    return b;
-  }
-  return gapExcitation(mesh, gapM, shape.feed.wire);
+  const grounded = shape.ground?.type === "perfect" && isGroundedFeed(shape) ? (shape.feed.vertex === 0 ? "start" : "end") : null;
+  return gapExcitation(mesh, gapM, shape.feed.wire, undefined, grounded);
 }
 
 /** Currents and input impedance only: what a band sweep needs at frequencies off the design one. */

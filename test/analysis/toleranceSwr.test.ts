@@ -1,5 +1,6 @@
 // SWR as built: the 90th-percentile publishing rule, the per-frequency percentiles of the bent
 // copies (bare and after a feed), and the tolerance verdict that covers SWR as well as gain.
+import { feedGapM } from "../../generator/em/feedSource.js";
 import { describe, expect, it } from "vitest";
 import { solveFeed } from "../../generator/em/index.js";
 import { swr } from "../../generator/analysis/swr.js";
@@ -34,8 +35,8 @@ describe("SWR percentiles of the bent copies", () => {
   it("with no bending error every copy is the design: every percentile is the design's SWR", () => {
     const study = toleranceSwrStudy(dipole, freqs, { ...base, bendSigmaDeg: 0, lengthSigmaFraction: 0 }, 2);
     study.perFrequency.forEach((row, k) => {
-      // the mesh of the design frequency, as the band sweep keeps it
-      const nominal = swr(solveFeed({ ...dipole, frequencyHz: freqs[k] }, { segmentsPerWavelength: (25 * f0) / freqs[k] }).inputImpedanceOhm, 50);
+      // the mesh and the feed gap (in metres) of the design frequency, as the band sweep keeps them
+      const nominal = swr(solveFeed({ ...dipole, frequencyHz: freqs[k] }, { segmentsPerWavelength: (25 * f0) / freqs[k], feedGapM: feedGapM(f0) }).inputImpedanceOhm, 50);
       expect(row.bare.p50).toBeCloseTo(nominal, 9);
       expect(row.bare.p90).toBeCloseTo(nominal, 9);
       expect(row.afterFeed).toBeUndefined();

@@ -8,17 +8,18 @@
 import { describe, expect, it } from "vitest";
 import { buildMesh, fillImpedance, solveComplex, solveFeed, solveShape, validateShape } from "../../generator/em/index.js";
 import { ETA0_OHM } from "../../generator/units.js";
+import { feedGapM, gapCurrent, gapExcitation } from "../../generator/em/feedSource.js";
 import { ONE_METRE_WAVELENGTH_HZ as F } from "../helpers/shapes.js";
 
 const horizontal = (h: number, a: number, ground = true) =>
   validateShape({
-    frequencyHz: F, wireRadiusM: a, segmentsPerWavelength: 50,
+    frequencyHz: F, wireRadiusM: a, segmentsPerWavelength: 200,
     wires: [{ pointsM: [[-0.25, 0, h], [0, 0, h], [0.25, 0, h]] }], feed: { wire: 0, vertex: 1 },
     ...(ground ? { ground: { type: "perfect" as const } } : {}),
   });
 const vertical = (centreM: number, a: number) =>
   validateShape({
-    frequencyHz: F, wireRadiusM: a, segmentsPerWavelength: 50,
+    frequencyHz: F, wireRadiusM: a, segmentsPerWavelength: 200,
     wires: [{ pointsM: [[0, 0, centreM - 0.25], [0, 0, centreM], [0, 0, centreM + 0.25]] }], feed: { wire: 0, vertex: 1 },
     ground: { type: "perfect" },
   });
@@ -26,15 +27,17 @@ const vertical = (centreM: number, a: number) =>
 /** The free-space pair: the dipole and its mirror, the mirror fed with `imageVolts`. */
 function pairImpedance(points: [number, number, number][], a: number, imageVolts: number) {
   const mirror = points.map(([x, y, z]): [number, number, number] => [x, y, -z]);
-  const shape = validateShape({ frequencyHz: F, wireRadiusM: a, segmentsPerWavelength: 50, wires: [{ pointsM: points }, { pointsM: mirror }], feed: { wire: 0, vertex: 1 } });
+  const shape = validateShape({ frequencyHz: F, wireRadiusM: a, segmentsPerWavelength: 200, wires: [{ pointsM: points }, { pointsM: mirror }], feed: { wire: 0, vertex: 1 } });
+  // at 200 per wavelength the segments are already as short as the feed gap asks (λ/200 = g/4), so
+  // both wires get the same uniform mesh and the same finite-gap source (feedSource.ts)
   const mesh = buildMesh(shape);
   const z = fillImpedance(mesh, 2 * Math.PI);
-  const re = new Float64Array(mesh.unknowns);
-  re[mesh.feedBasis] = 1;
-  re[mesh.feedBasis + mesh.unknowns / 2] = imageVolts;
+  const own = gapExcitation(mesh, feedGapM(F), 0);
+  const half = mesh.unknowns / 2; // the mirror's basis functions follow the dipole's, in the same order
+  const re = own.map((v, m) => (m < half ? v : imageVolts * own[m - half]));
   const x = solveComplex(z, re, new Float64Array(mesh.unknowns));
-  const ir = x.re[mesh.feedBasis], ii = x.im[mesh.feedBasis], d = ir * ir + ii * ii;
-  return { re: ir / d, im: -ii / d };
+  const i = gapCurrent(own, x.re, x.im), d = i.re * i.re + i.im * i.im;
+  return { re: i.re / d, im: -i.im / d };
 }
 
 describe("image coupling equals the free-space pair (Balanis §4.7)", () => {
