@@ -6,8 +6,9 @@
 // the reference met none either (a centre-fed 1 λ or 2 λ wire sits at a current minimum, kilohms,
 // far from 50 Ω), the entry says so without a search. Pure: same inputs, same bytes.
 import { analyzeDesign } from "../analysis/index.js";
-import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
+import { type DesignOutcome } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
+import { offCentreShapeOf } from "../design/offCentreObjective.js";
 import { addPiece } from "../shapes/bentArm.js";
 import { parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { SOLVER_VERSION } from "../em/index.js";
@@ -18,6 +19,7 @@ import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
 import { GENERATOR_VERSION } from "./versions.js";
+import { computeOffCentreReference, designCentreFed, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
   lengthWl: number;
@@ -34,6 +36,8 @@ export interface ReferenceResult extends ReferenceKey {
   evaluations: number;
   stopReasons: DesignOutcome["stopReasons"];
   history: DesignOutcome["history"];
+  /** Direct-feed keys: the off-centre-fed search in wavelength units (computeOffCentre.ts). */
+  offCentre?: OffCentreReference;
 }
 
 export const referenceId = (k: ReferenceKey): string => entryId("ref", k.lengthWl, k.piecesPerArm, k.variant);
@@ -71,7 +75,8 @@ export function referenceHash(grid: Grid, k: ReferenceKey): string {
 /** Searches in wavelength units, starting from the K − 1 result with its last piece split. */
 export function computeReference(grid: Grid, k: ReferenceKey, previous: ReferenceResult | null): ReferenceResult {
   const request = referenceRequest(grid, k);
-  const outcome = previous ? designBentArm(request, { start: addPiece(previous.x, previous.piecesPerArm), polishOnly: false }) : designBentArm(request);
+  const outcome = designCentreFed(request, previous ? addPiece(previous.x, previous.piecesPerArm) : undefined, true);
+  const offCentre = computeOffCentreReference(k, request);
   return roundDeep({
     ...k,
     id: referenceId(k),
@@ -82,6 +87,7 @@ export function computeReference(grid: Grid, k: ReferenceKey, previous: Referenc
     evaluations: outcome.evaluations,
     stopReasons: outcome.stopReasons,
     history: outcome.history,
+    ...(offCentre ? { offCentre } : {}),
   }, 15); // the start point of every band's polish: keep it exact
 }
 
@@ -115,20 +121,22 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
 export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
   const request = bandRequest(grid, cell);
   // polish the reference shape (or, when the reference met no constraint, its least-bad attempt)
-  let outcome = designBentArm(request, { start: reference.x });
+  let outcome = designCentreFed(request, reference.x, false);
   let startedFrom: "reference" | "search" = "reference";
   if (outcome.status !== "ok" && reference.status === "ok") {
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
-    outcome = designBentArm(request, { start: reference.x, polishOnly: false });
+    outcome = designCentreFed(request, reference.x, true);
     startedFrom = "search";
   } else if (outcome.status !== "ok") {
     outcome = { ...outcome, message: `${outcome.message}; the search in wavelength units over a ${grid.reference.relativeBandwidth * 100} % band found no such shape either` };
   }
+  let family: Family;
+  ({ outcome, family } = tryOffCentre(request, outcome, reference.offCentre));
   const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
   const analysis = outcome.status === "ok"
-    ? analyzeDesign(shapeFor(outcome, request), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
+    ? analyzeDesign(shapeFor(outcome, request, family), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
     : null;
-  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance });
+  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance, family });
 }
 
-const shapeFor = (o: DesignOutcome, r: DesignRequest) => shapeOf(o.x, r);
+const shapeFor = (o: DesignOutcome, r: DesignRequest, family: Family) => (family === "off-centre" ? offCentreShapeOf(o.x, r) : shapeOf(o.x, r));
