@@ -73,8 +73,10 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     if (dims) labels.push([labelAt([s[0] + r, s[1]], [1, 0], 8, `main lobe out of the page, ${toward ? "toward you (+z)" : "away from you (−z)"}`, FONT.caption)]);
   } else {
     const u0 = unit(Math.sin(th) * Math.cos(ph), -Math.sin(th) * Math.sin(ph));
-    // the shape is mirror-symmetric about the y axis, so a lobe off that axis has a twin
-    const twins: Pt[] = Math.abs(u0[0]) > 0.05 ? [u0, [-u0[0], u0[1]]] : [u0];
+    // a centre-fed shape is mirror-symmetric about the y axis, so a lobe off that axis has a twin;
+    // an off-centre-fed one (entry.family) is not, and its lobe has none
+    const mirror = entry.family !== "off-centre";
+    const twins: Pt[] = mirror && Math.abs(u0[0]) > 0.05 ? [u0, [-u0[0], u0[1]]] : [u0];
     const len = dims ? 72 : 120, head = 15 * k;
     twins.forEach((u, i) => {
       const tx = Math.abs(u[0]) > 1e-9 ? boxW / 2 / Math.abs(u[0]) : Infinity, ty = Math.abs(u[1]) > 1e-9 ? boxH / 2 / Math.abs(u[1]) : Infinity;
@@ -126,7 +128,8 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     }
     const away = fv > 0 && fv < n - 1 ? unit(2 * feed[0] - P[fv - 1][0] - P[fv + 1][0], 2 * feed[1] - P[fv - 1][1] - P[fv + 1][1]) : ([0, 1] as Pt);
     const fu: Pt = away[0] || away[1] ? away : [0, 1];
-    labels.push(around(feed, [fu, [0, 1], [1, 0], [-1, 0]], 14, "feed"));
+    const oc = entry.family === "off-centre" ? shape.offCentre : undefined;
+    labels.push(around(feed, [fu, [0, 1], [1, 0], [-1, 0]], 14, oc ? `feed, off centre: ${lengthLabel(oc.feedFromTipM, lu)} from the left tip` : "feed"));
     let unlabelled = 0;
     for (let i = 0; i + 1 < n; i++) {
       const a = P[i], c = P[i + 1];

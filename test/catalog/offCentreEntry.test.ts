@@ -11,20 +11,28 @@ import { expandGrid, parseGrid } from "../../generator/catalog/grid.js";
 import { checkFrequencies } from "../../generator/design/objective.js";
 import { evaluateOffCentre } from "../../generator/design/offCentreObjective.js";
 import { SPEED_OF_LIGHT_M_PER_S } from "../../generator/units.js";
+import { armTables, feedLead, needsNoPartsOf, realizedGainOf } from "../../generator/site/feedRows.js";
+import { filterDesigns, finderIndex, NO_FILTERS } from "../../generator/site/finder.js";
+import { bandsOf, isOk } from "../../generator/site/catalog.js";
+import { bandRow } from "../../generator/site/tables.js";
+import { shapeSvg } from "../../generator/render/shapeSvg.js";
+import { wireDxf } from "../../generator/export/dxf.js";
+import { exportShapeOf } from "../../generator/site/downloads.js";
 
 const GRID = "test/fixtures/tiny-grid-offcentre.yaml";
 const grid = parseGrid(readFileSync(GRID, "utf8"), GRID);
 const cell = expandGrid(grid).find((c) => c.id === "2m-1wl-k1-direct-feed")!;
 const key = { lengthWl: 1, piecesPerArm: 1, variant: "direct-feed" as const };
 
-describe("catalog: off-centre-fed entry where the centre feed cannot meet the limit", () => {
-  let reference: ReferenceResult;
-  let entry: Entry;
-  beforeAll(() => {
-    reference = computeReference(grid, key, null);
-    entry = computeEntry(grid, cell, reference);
-  });
+// one reference search and one entry, shared by every check below (CPU: a few seconds)
+let reference: ReferenceResult;
+let entry: Entry;
+beforeAll(() => {
+  reference = computeReference(grid, key, null);
+  entry = computeEntry(grid, cell, reference);
+});
 
+describe("catalog: off-centre-fed entry where the centre feed cannot meet the limit", () => {
   it("the centre-fed reference misses SWR 2 on a 1 λ wire; the off-centre reference meets it", () => {
     // common practice: a centre feed on a full-wave wire sits at a current minimum (kilohms)
     expect(reference.status).toBe("infeasible");
@@ -66,5 +74,49 @@ describe("catalog: off-centre-fed entry where the centre feed cannot meet the li
     expect(feed.toleranceSwr.meetsLimitAsBuilt).toBe(true);
     expect(feed.buildNote).toMatch(/choke/);
     expect(feed.feedFraction).toBeCloseTo(entry.shape!.offCentre!.feedFraction, 4);
+  });
+});
+
+describe("site: feed rows, both arms and ranking for an off-centre entry", () => {
+  it("leads with the recommended feed; SWR bare and after it at every in-band sweep point", () => {
+    if (!isOk(entry)) throw new Error("entry not buildable");
+    const lead = feedLead(entry)!;
+    const rec = entry.feed!.options.options[entry.feed!.options.recommended!];
+    expect(lead.recommended!.build).toBe(rec.build);
+    const inBand = entry.sweep.points.filter((p) => p.inBand);
+    expect(lead.swr).toHaveLength(inBand.length);
+    // the worst "after the feed" value shown is the option's worst in-band SWR
+    expect(Math.max(...lead.swr.map((p) => Number(p.afterFeed)))).toBeCloseTo(rec.worstSwr!, 1);
+    expect(lead.alternatives).toHaveLength(entry.feed!.options.options.length - 1);
+    expect(lead.offCentre).toMatch(/off centre: .* m .* from the left tip/);
+    expect(lead.buildNote).toMatch(/choke/);
+  });
+
+  it("lists both arms from the feed outward; their lengths add up to the wire", () => {
+    if (!isOk(entry)) throw new Error("entry not buildable");
+    const arms = armTables(entry)!;
+    expect(arms.map((a) => a.name)).toEqual(["Left (short) arm", "Right (long) arm"]);
+    const totalMm = arms.flatMap((a) => a.rows.map((r) => Number(r.lengthMm))).reduce((s, v) => s + v, 0);
+    expect(totalMm).toBeCloseTo(entry.inputs.lengthM * 1000, -1);
+  });
+
+  it("band table and finder rank by realized gain after the feed and filter by needs-no-parts", () => {
+    const row = bandRow(entry);
+    expect(row.cells.realized.sort).toBe(realizedGainOf(entry));
+    expect(row.cells.noParts.sort).toBe(needsNoPartsOf(entry) ? "yes" : "no");
+    const index = finderIndex(bandsOf([entry]), [entry]);
+    expect(index.designs[0].realizedGainDbi).toBe(entry.feed!.realizedGainDbi);
+    const noParts = filterDesigns(index, { ...NO_FILTERS, noParts: true });
+    expect(noParts.length).toBe(entry.feed!.needsNoParts ? 1 : 0);
+  });
+
+  it("the drawing marks the feed off centre with no mirror-twin lobe; the DXF circles the feed at its vertex", () => {
+    if (!isOk(entry)) throw new Error("entry not buildable");
+    const svg = shapeSvg(entry, { dimensions: true });
+    expect(svg).toMatch(/feed, off centre: [\d.]+ (mm|cm) from the left tip/);
+    expect(svg).not.toMatch(/lobe-arrow-twin/);
+    const shape = exportShapeOf(entry);
+    expect(shape.feedPointM).toEqual(entry.shape.pointsM[entry.shape.feedVertex]);
+    expect(wireDxf(shape)).toMatch(/CIRCLE/);
   });
 });
