@@ -76,7 +76,7 @@ export function referenceHash(grid: Grid, k: ReferenceKey): string {
 export function computeReference(grid: Grid, k: ReferenceKey, previous: ReferenceResult | null): ReferenceResult {
   const request = referenceRequest(grid, k);
   const outcome = designCentreFed(request, previous ? addPiece(previous.x, previous.piecesPerArm) : undefined, true);
-  const offCentre = computeOffCentreReference(k, request);
+  const offCentre = computeOffCentreReference(k, request, outcome.x);
   return roundDeep({
     ...k,
     id: referenceId(k),

@@ -32,10 +32,23 @@ export interface OffCentreReference {
   evaluations: number;
 }
 
-/** The off-centre search in wavelength units for one direct-feed (length, K); null for max-gain keys. */
-export function computeOffCentreReference(k: ReferenceKey, request: DesignRequest): OffCentreReference | null {
+/**
+ * The centre-fed parameters [φ1, β…, u…] as an off-centre vector: feed in the middle (t = ½) and
+ * both arms alike; at t = ½ each arm is half the wire, so the fractions carry over unchanged.
+ */
+export function mirrorAsOffCentre(x: readonly number[], piecesPerArm: number): number[] {
+  const arm = x.slice(1, 2 * piecesPerArm - 1);
+  return [0.5, x[0], ...arm, ...arm];
+}
+
+/**
+ * The off-centre search in wavelength units for one direct-feed (length, K), with the centre-fed
+ * reference's shape (fed in the middle) competing as a start, so it never ends worse than that
+ * shape at the same limits; null for max-gain keys.
+ */
+export function computeOffCentreReference(k: ReferenceKey, request: DesignRequest, centreX?: readonly number[]): OffCentreReference | null {
   if (k.variant !== "direct-feed") return null;
-  const outcome = designOffCentre(searchRequestOf(request));
+  const outcome = designOffCentre(searchRequestOf(request), centreX ? { start: mirrorAsOffCentre(centreX, k.piecesPerArm) } : {});
   return { status: outcome.status, x: outcome.x, gainDbi: outcome.evaluation.gainDbi, evaluations: outcome.evaluations };
 }
 

@@ -145,3 +145,16 @@ export function nearestBuildable(e: Entry, all: readonly Entry[]): OkEntry | nul
     (o.inputs.variant === i.variant ? 0 : 100) + 10 * Math.abs(o.inputs.lengthWl - i.lengthWl) + Math.abs(o.inputs.piecesPerArm - i.piecesPerArm);
   return candidates.reduce<OkEntry | null>((best, o) => (best === null || cost(o) < cost(best) || (cost(o) === cost(best) && o.id < best.id) ? o : best), null);
 }
+
+/**
+ * The pieces the "scale to my frequency" calculator lists: one arm's for mirror-image arms, both
+ * arms' (left then right, each from the feed outward) for an off-centre-fed shape.
+ */
+export function scalePieces(e: OkEntry): { pieceLengthsM: number[]; labels: string[] } {
+  const oc = e.shape.offCentre;
+  if (e.family !== "off-centre" || !oc) return { pieceLengthsM: e.shape.pieceLengthsM, labels: e.shape.pieceLengthsM.map((_, k) => `Piece ${k + 1} of each arm`) };
+  return {
+    pieceLengthsM: [...oc.left.pieceLengthsM, ...oc.right.pieceLengthsM],
+    labels: [...oc.left.pieceLengthsM.map((_, k) => `Left arm piece ${k + 1}`), ...oc.right.pieceLengthsM.map((_, k) => `Right arm piece ${k + 1}`)],
+  };
+}

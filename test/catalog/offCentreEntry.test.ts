@@ -5,7 +5,9 @@
 import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, it } from "vitest";
 import { computeEntry, computeReference, referenceRequest, type ReferenceResult } from "../../generator/catalog/compute.js";
-import { SEARCH_SWR_MARGIN, searchSwrLimit } from "../../generator/catalog/computeOffCentre.js";
+import { mirrorAsOffCentre, SEARCH_SWR_MARGIN, searchSwrLimit } from "../../generator/catalog/computeOffCentre.js";
+import { unpack, wirePointsM } from "../../generator/shapes/bentArm.js";
+import { offCentrePointsM, unpackOffCentre } from "../../generator/shapes/offCentre.js";
 import { entrySchema, type Entry } from "../../generator/catalog/entrySchema.js";
 import { expandGrid, parseGrid } from "../../generator/catalog/grid.js";
 import { checkFrequencies } from "../../generator/design/objective.js";
@@ -23,6 +25,17 @@ const GRID = "test/fixtures/tiny-grid-offcentre.yaml";
 const grid = parseGrid(readFileSync(GRID, "utf8"), GRID);
 const cell = expandGrid(grid).find((c) => c.id === "2m-1wl-k1-direct-feed")!;
 const key = { lengthWl: 1, piecesPerArm: 1, variant: "direct-feed" as const };
+
+describe("the centre-fed start for the off-centre search", () => {
+  it("a centre-fed shape read as off-centre (t = ½, both arms alike) has the same vertices", () => {
+    const x = [0.6, 0.3, -0.2, 0.3, 0.25]; // K = 3: φ1, β1, β2, u1, u2
+    const spec = { piecesPerArm: 3, wireLengthM: 2 };
+    const a = wirePointsM(unpack(x, 3), spec);
+    const b = offCentrePointsM(unpackOffCentre(mirrorAsOffCentre(x, 3), 3), spec);
+    expect(b).toHaveLength(a.length);
+    b.forEach((p, i) => p.forEach((v, j) => expect(v).toBeCloseTo(a[i][j], 12)));
+  });
+});
 
 // one reference search and one entry, shared by every check below (CPU: a few seconds)
 let reference: ReferenceResult;
