@@ -19,7 +19,7 @@ import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
 import { GENERATOR_VERSION } from "./versions.js";
-import { computeOffCentreReference, designCentreFed, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
+import { computeOffCentreReference, designCentreFed, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
   lengthWl: number;
@@ -121,9 +121,10 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
 export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
   const request = bandRequest(grid, cell);
   // polish the reference shape (or, when the reference met no constraint, its least-bad attempt)
-  let outcome = designCentreFed(request, reference.x, false);
-  let startedFrom: "reference" | "search" = "reference";
-  if (outcome.status !== "ok" && reference.status === "ok") {
+  const perBand = searchPerBand(request, reference.status); // direct feed: a polish alone loses (computeOffCentre.ts)
+  let outcome = designCentreFed(request, reference.x, perBand);
+  let startedFrom: "reference" | "search" = perBand ? "search" : "reference";
+  if (!perBand && outcome.status !== "ok" && reference.status === "ok") {
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
     outcome = designCentreFed(request, reference.x, true);
     startedFrom = "search";
