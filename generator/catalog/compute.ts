@@ -8,8 +8,9 @@
 // above DOOMED_POLISH_SWR_FACTOR × the limit it is not even polished (the entry's optimizer record
 // says "startFarFromFeasible"). Pure: same inputs, same bytes.
 import { analyzeDesign } from "../analysis/index.js";
-import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
+import { type DesignOutcome } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
+import { offCentreShapeOf } from "../design/offCentreObjective.js";
 import { addPiece } from "../shapes/bentArm.js";
 import { parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { SOLVER_VERSION } from "../em/index.js";
@@ -21,6 +22,7 @@ import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
 import { GENERATOR_VERSION } from "./versions.js";
+import { computeOffCentreReference, designCentreFed, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
   lengthWl: number;
@@ -37,6 +39,8 @@ export interface ReferenceResult extends ReferenceKey {
   evaluations: number;
   stopReasons: DesignOutcome["stopReasons"];
   history: DesignOutcome["history"];
+  /** Direct-feed keys: the off-centre-fed search in wavelength units (computeOffCentre.ts). */
+  offCentre?: OffCentreReference;
 }
 
 export const referenceId = (k: ReferenceKey): string => entryId("ref", k.lengthWl, k.piecesPerArm, k.variant);
@@ -74,7 +78,8 @@ export function referenceHash(grid: Grid, k: ReferenceKey): string {
 /** Searches in wavelength units, starting from the K − 1 result with its last piece split. */
 export function computeReference(grid: Grid, k: ReferenceKey, previous: ReferenceResult | null): ReferenceResult {
   const request = referenceRequest(grid, k);
-  const outcome = previous ? designBentArm(request, { start: addPiece(previous.x, previous.piecesPerArm), polishOnly: false }) : designBentArm(request);
+  const outcome = designCentreFed(request, previous ? addPiece(previous.x, previous.piecesPerArm) : undefined, true);
+  const offCentre = computeOffCentreReference(k, request, outcome.x);
   return roundDeep({
     ...k,
     id: referenceId(k),
@@ -85,6 +90,7 @@ export function computeReference(grid: Grid, k: ReferenceKey, previous: Referenc
     evaluations: outcome.evaluations,
     stopReasons: outcome.stopReasons,
     history: outcome.history,
+    ...(offCentre ? { offCentre } : {}),
   }, 15); // the start point of every band's polish: keep it exact
 }
 
@@ -122,23 +128,26 @@ export function computeEntry(grid: Grid, cell: CellRequest, reference: Reference
   const request = bandRequest(grid, cell);
   // polish the reference shape (or, when the reference met no constraint, its least-bad attempt,
   // unless that attempt is too far from the SWR limit for a local polish to reach it)
+  const perBand = searchPerBand(request, reference.status); // direct feed: a polish alone loses (computeOffCentre.ts)
   const skipPolishAboveSwr = reference.status === "ok" ? undefined : DOOMED_POLISH_SWR_FACTOR * request.swrLimit;
-  let outcome = designBentArm(request, { start: reference.x, skipPolishAboveSwr });
-  let startedFrom: "reference" | "search" = "reference";
-  if (outcome.status !== "ok" && reference.status === "ok") {
+  let outcome = designCentreFed(request, reference.x, perBand, skipPolishAboveSwr);
+  let startedFrom: "reference" | "search" = perBand ? "search" : "reference";
+  if (!perBand && outcome.status !== "ok" && reference.status === "ok") {
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
-    outcome = designBentArm(request, { start: reference.x, polishOnly: false });
+    outcome = designCentreFed(request, reference.x, true);
     startedFrom = "search";
   }
   if (outcome.status !== "ok") {
     outcome = { ...outcome, message: infeasibleMessage(outcome, request, reference.status !== "ok", grid.reference.relativeBandwidth) };
   }
+  let family: Family;
+  ({ outcome, family } = tryOffCentre(request, outcome, reference.offCentre));
   const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
   const analysis = outcome.status === "ok"
-    ? analyzeDesign(shapeFor(outcome, request), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
+    ? analyzeDesign(shapeFor(outcome, request, family), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
     : null;
-  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance });
+  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance, family });
 }
 
 // analysed as published (rounded), so the entry reproduces from its own shape file
-const shapeFor = (o: DesignOutcome, r: DesignRequest) => publishedShapeOf(shapeOf(o.x, r));
+const shapeFor = (o: DesignOutcome, r: DesignRequest, family: Family) => publishedShapeOf(family === "off-centre" ? offCentreShapeOf(o.x, r) : shapeOf(o.x, r));

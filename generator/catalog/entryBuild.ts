@@ -5,8 +5,9 @@ import type { DesignOutcome } from "../design/designBentArm.js";
 import { GEOMETRY_PENALTY } from "../design/objective.js";
 import type { DesignRequest } from "../design/request.js";
 import { SOLVER_VERSION } from "../em/index.js";
-import { pieceLengthsM, unpack, wirePointsM } from "../shapes/bentArm.js";
-import { DEG_PER_RAD, wavelengthM } from "../units.js";
+import { wavelengthM } from "../units.js";
+import type { Family } from "./computeOffCentre.js";
+import { shapeData } from "./entryShape.js";
 import { CUT_STEP_DEG, GRID_PHI_STEP_DEG, GRID_THETA_STEP_DEG } from "../analysis/analyzeDesign.js";
 import { ENTRY_SCHEMA_VERSION, type Entry } from "./entrySchema.js";
 import type { CellRequest, Grid } from "./grid.js";
@@ -24,6 +25,8 @@ export interface EntryParts {
   analysis: Analysis | null;
   inputHash: string;
   tolerance: { samples: number; bendSigmaDeg: number; lengthSigmaFraction: number };
+  /** Which shape family `outcome.x` belongs to (default centre-fed). */
+  family?: Family;
 }
 
 /**
@@ -58,10 +61,6 @@ export function entryTitle(cell: CellRequest): string {
 export function buildEntry(p: EntryParts): Entry {
   const { cell, request, outcome, analysis } = p;
   const lambdaM = wavelengthM(request.frequencyHz);
-  const params = unpack(outcome.x, request.piecesPerArm);
-  const spec = { piecesPerArm: request.piecesPerArm, wireLengthM: request.lengthWl * lambdaM };
-  const points = wirePointsM(params, spec);
-  const xs = points.map((q) => q[0]), ys = points.map((q) => q[1]);
   const ok = outcome.status === "ok" && analysis !== null;
   const a = analysis!;
   const body: Omit<Entry, "contentHash"> = {
@@ -91,14 +90,8 @@ export function buildEntry(p: EntryParts): Entry {
     },
     versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
     inputHash: p.inputHash,
-    shape: ok ? {
-      pointsM: points,
-      feedVertex: request.piecesPerArm,
-      pieceLengthsM: pieceLengthsM(params, spec),
-      firstAngleDeg: params.firstAngleRad * DEG_PER_RAD,
-      bendAnglesDeg: params.bendAnglesRad.map((b) => b * DEG_PER_RAD),
-      spanM: { x: Math.max(...xs) - Math.min(...xs), y: Math.max(...ys) - Math.min(...ys) },
-    } : null,
+    ...(p.family === "off-centre" ? { family: "off-centre" as const } : {}),
+    shape: ok ? shapeData(outcome.x, request, p.family) : null,
     figures: ok ? {
       gainDbi: a.design.gainDbi,
       directivityDbi: a.design.directivityDbi,

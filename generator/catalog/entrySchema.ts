@@ -39,6 +39,14 @@ export function makeEntrySchema(z: Z) {
     firstAngleDeg: num,
     bendAnglesDeg: z.array(num),
     spanM: z.object({ x: num, y: num }).strict(),
+    // off-centre-fed shapes (issue 10): both arms from the feed outward, and where the feed sits
+    offCentre: z.object({
+      feedFromTipM: num,
+      feedFraction: num,
+      halfApexDeg: num,
+      left: z.object({ lengthM: num, pieceLengthsM: z.array(num), bendAnglesDeg: z.array(num) }).strict(),
+      right: z.object({ lengthM: num, pieceLengthsM: z.array(num), bendAnglesDeg: z.array(num) }).strict(),
+    }).strict().optional(),
   }).strict();
   const figures = z.object({
     gainDbi: num,
@@ -161,6 +169,8 @@ export function makeEntrySchema(z: Z) {
     inputs,
     versions: z.object({ solver: z.string(), generator: z.string() }).strict(),
     inputHash: z.string().regex(/^[0-9a-f]{64}$/),
+    /** Shape family; absent means centre-fed (mirror-image arms). */
+    family: z.enum(["centre-fed", "off-centre"]).optional(),
     shape: shape.nullable(),
     figures: figures.nullable(),
     sweep: sweep.nullable(),

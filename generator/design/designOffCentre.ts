@@ -3,7 +3,9 @@
 // σ0 = 0.25, SWR checked at the band edges and centre against 97.5 % of the limit, then a
 // Nelder–Mead polish (step 0.02 in z) checking all 11 band points against the limit itself.
 // Parameters and box: shapes/offCentre.ts and shapes/offCentreConstraints.ts (4K − 2 of them).
-// `start` (parameters x) competes with the search's best, so the search never ends worse than it.
+// `start` (parameters x) competes with the search's best, so the search never ends worse than it;
+// with `polishOnly` the search is skipped and only the polish runs from `start` (step 0.01 in z), as
+// the catalog does per band from a shape found once in wavelength units.
 import { createIpop, nelderMead } from "../optimize/index.js";
 import { offCentreBounds } from "../shapes/offCentreConstraints.js";
 import { offCentreParameterCount } from "../shapes/offCentre.js";
@@ -16,7 +18,7 @@ import { limitsOf, type DesignRequest } from "./request.js";
 const SEARCH_SWR_POINTS = 3;
 const SEARCH_MARGIN = 0.975;
 
-export function designOffCentre(r: DesignRequest, options: { start?: number[]; onProgress?: (p: DesignProgress) => void } = {}): DesignOutcome {
+export function designOffCentre(r: DesignRequest, options: { start?: number[]; polishOnly?: boolean; onProgress?: (p: DesignProgress) => void } = {}): DesignOutcome {
   const n = offCentreParameterCount(r.piecesPerArm);
   const { lower, upper } = offCentreBounds(offCentreSpecOf(r), limitsOf(r), wavelengthM(r.frequencyHz));
   const toX = (z: readonly number[]) => z.map((v, i) => lower[i] + v * (upper[i] - lower[i]));
@@ -37,35 +39,44 @@ export function designOffCentre(r: DesignRequest, options: { start?: number[]; o
     return e.score;
   };
   const zStart = options.start ? toZ(options.start).map(clamp01) : null;
-  const startScore = zStart ? score(zStart, searchFrequencies, r.swrLimit * SEARCH_MARGIN) : Infinity;
-  const ipop = createIpop({
-    x0: new Array(n).fill(0.5),
-    sigma0: 0.25,
-    lowerBounds: new Array(n).fill(0),
-    upperBounds: new Array(n).fill(1),
-    seed: r.seed,
-    maxEvaluations: r.maxEvaluations ?? 500 * n + 500,
-    maxRestarts: 4,
-    tolFun: 1e-4,
-    tolX: 1e-4,
-  });
-  while (ipop.stop().length === 0) {
-    const zs = ipop.ask();
-    ipop.tell(zs, zs.map((z) => score(z, searchFrequencies, r.swrLimit * SEARCH_MARGIN)));
+  const polishOnly = zStart !== null && options.polishOnly === true;
+  let z0: number[] = zStart ?? new Array(n).fill(0.5);
+  let history: DesignOutcome["history"] = [];
+  let stopReasons: DesignOutcome["stopReasons"] = [];
+  let searchEvaluations = 0;
+  if (!polishOnly) {
+    const startScore = zStart ? score(zStart, searchFrequencies, r.swrLimit * SEARCH_MARGIN) : Infinity;
+    const ipop = createIpop({
+      x0: new Array(n).fill(0.5),
+      sigma0: 0.25,
+      lowerBounds: new Array(n).fill(0),
+      upperBounds: new Array(n).fill(1),
+      seed: r.seed,
+      maxEvaluations: r.maxEvaluations ?? 500 * n + 500,
+      maxRestarts: 4,
+      tolFun: 1e-4,
+      tolX: 1e-4,
+    });
+    while (ipop.stop().length === 0) {
+      const zs = ipop.ask();
+      ipop.tell(zs, zs.map((z) => score(z, searchFrequencies, r.swrLimit * SEARCH_MARGIN)));
+    }
+    const result = ipop.result();
+    z0 = zStart && startScore < result.f ? zStart : result.x;
+    history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
+    stopReasons = result.stopReasons;
+    searchEvaluations = result.evaluations;
   }
-  const result = ipop.result();
-  const z0 = zStart && startScore < result.f ? zStart : result.x;
-  const history = result.history.map((h) => ({ evaluations: h.evaluations, bestF: h.bestF }));
   const polish = nelderMead((z) => score(z, polishFrequencies, r.swrLimit), {
     x0: z0.map(clamp01),
-    initialStep: 0.02,
+    initialStep: polishOnly ? 0.01 : 0.02,
     lowerBounds: new Array(n).fill(0),
     upperBounds: new Array(n).fill(1),
     maxEvaluations: 60 * n,
     tolX: 1e-5,
     tolFun: 1e-5,
   });
-  history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + result.evaluations, bestF: h.bestF })));
+  history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + searchEvaluations, bestF: h.bestF })));
   const x = toX(polish.x);
   const evaluation = evaluateOffCentre(x, r, polishFrequencies, r.swrLimit);
   const feasible = evaluation.score < 0;
@@ -75,8 +86,8 @@ export function designOffCentre(r: DesignRequest, options: { start?: number[]; o
     x,
     evaluation,
     evaluations,
-    searchEvaluations: result.evaluations,
-    stopReasons: [...result.stopReasons, ...polish.stopReasons],
+    searchEvaluations,
+    stopReasons: [...stopReasons, ...polish.stopReasons],
     history,
   };
 }

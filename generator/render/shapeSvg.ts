@@ -129,7 +129,8 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
     }
     const away = fv > 0 && fv < n - 1 ? unit(2 * feed[0] - P[fv - 1][0] - P[fv + 1][0], 2 * feed[1] - P[fv - 1][1] - P[fv + 1][1]) : ([0, 1] as Pt);
     const fu: Pt = away[0] || away[1] ? away : [0, 1];
-    labels.push(around(feed, [fu, [0, 1], [1, 0], [-1, 0]], 14, "feed"));
+    const oc = entry.family === "off-centre" ? shape.offCentre : undefined;
+    labels.push(around(feed, [fu, [0, 1], [1, 0], [-1, 0]], 14, oc ? `feed, off centre: ${lengthLabel(oc.feedFromTipM, lu)} from the left tip` : "feed"));
     let unlabelled = 0;
     for (let i = 0; i + 1 < n; i++) {
       const a = P[i], c = P[i + 1];

@@ -3,6 +3,7 @@
 import type { Band } from "./catalog.js";
 import { isOk, type Entry } from "./ok.js";
 import { paths } from "./paths.js";
+import { needsNoPartsOf, realizedGainOf } from "./feedRows.js";
 
 export type Variant = "max-gain" | "direct-feed";
 
@@ -19,6 +20,10 @@ export interface FinderRecord {
   /** Width of the SWR-below-limit span (Hz), 0 when there is none. */
   swr2WidthHz: number;
   variant: Variant;
+  /** Realized gain after the recommended feed (dBi), null when no feed option exists (issue 10). */
+  realizedGainDbi?: number | null;
+  /** The recommended feed is a bought balun alone. */
+  needsNoParts?: boolean;
   /** Base-relative page and thumbnail paths. */
   url: string;
   thumb: string;
@@ -53,13 +58,15 @@ export function finderIndex(bands: readonly Band[], entries: readonly Entry[]): 
       spanYM: e.shape.spanM.y,
       swr2WidthHz: e.sweep.swr2Span?.widthHz ?? 0,
       variant: e.inputs.variant,
+      realizedGainDbi: realizedGainOf(e),
+      needsNoParts: needsNoPartsOf(e),
       url: paths.design(e.id),
       thumb: paths.thumb(e.id),
     })),
   };
 }
 
-export const SORTS = ["gain", "span", "bandwidth", "length"] as const;
+export const SORTS = ["gain", "span", "bandwidth", "length", "realized"] as const;
 export type SortKey = (typeof SORTS)[number];
 
 export interface FinderFilters {
@@ -71,15 +78,17 @@ export interface FinderFilters {
   variant: Variant | null;
   minBandwidthKhz: number | null;
   sort: SortKey;
+  /** true: only designs whose recommended feed needs no parts; null: all. */
+  noParts?: true | null;
 }
 
 export const NO_FILTERS: FinderFilters = {
-  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, sort: "gain",
+  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, sort: "gain", noParts: null,
 };
 
 /** Query-string names of the filters (also the form field names). */
 export const PARAM = {
-  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", sort: "sort",
+  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", sort: "sort", noParts: "noparts",
 } as const;
 
 const num = (text: string | null | undefined): number | null => {
@@ -103,6 +112,7 @@ export function parseFilters(get: (name: string) => string | null | undefined): 
     variant: variant === "max-gain" || variant === "direct-feed" ? variant : null,
     minBandwidthKhz: num(get(PARAM.minBandwidthKhz)),
     sort: (SORTS as readonly string[]).includes(sort ?? "") ? (sort as SortKey) : "gain",
+    noParts: get(PARAM.noParts) === "1" ? true : null,
   };
 }
 
@@ -111,8 +121,8 @@ export function filterParams(fl: FinderFilters): [string, string][] {
   const out: [string, string][] = [];
   for (const key of Object.keys(PARAM) as (keyof FinderFilters)[]) {
     const v = fl[key];
-    if (v === null || (key === "sort" && v === "gain")) continue;
-    out.push([PARAM[key], String(v)]);
+    if (v === null || v === undefined || (key === "sort" && v === "gain")) continue;
+    out.push([PARAM[key], v === true ? "1" : String(v)]);
   }
   return out;
 }
@@ -122,6 +132,8 @@ const ORDER: Record<SortKey, (a: FinderRecord, b: FinderRecord) => number> = {
   span: (a, b) => Math.max(a.spanXM, a.spanYM) - Math.max(b.spanXM, b.spanYM),
   bandwidth: (a, b) => b.swr2WidthHz - a.swr2WidthHz,
   length: (a, b) => a.lengthWl - b.lengthWl,
+  // realized gain after the feed, best first; designs without a feed option last
+  realized: (a, b) => (b.realizedGainDbi ?? -Infinity) - (a.realizedGainDbi ?? -Infinity) || 0,
 };
 
 /** The designs that pass every filter, in the chosen order (ties by id). */
@@ -139,6 +151,7 @@ export function filterDesigns(index: FinderIndex, fl: FinderFilters): FinderReco
     if (fl.pieces !== null && d.pieces !== fl.pieces) return false;
     if (fl.variant !== null && d.variant !== fl.variant) return false;
     if (fl.minBandwidthKhz !== null && !(d.swr2WidthHz >= fl.minBandwidthKhz * 1e3)) return false;
+    if (fl.noParts === true && !d.needsNoParts) return false;
     return true;
   });
   const order = ORDER[fl.sort];

@@ -3,6 +3,7 @@
 import { isOk, type Entry, type OkEntry } from "./ok.js";
 import * as f from "./format.js";
 import { plain, shown, type Shown } from "./shown.js";
+import { needsNoPartsOf, realizedGainOf } from "./feedRows.js";
 
 export interface Row {
   label: string;
@@ -19,6 +20,8 @@ export const BAND_COLUMNS = [
   { key: "span", label: "Span (x × y)", numeric: true },
   { key: "bandwidth", label: "SWR < 2 bandwidth", numeric: true },
   { key: "variant", label: "Feed variant", numeric: false },
+  { key: "realized", label: "Gain after the feed", numeric: true },
+  { key: "noParts", label: "Needs no parts", numeric: false },
 ] as const;
 export type BandColumn = (typeof BAND_COLUMNS)[number]["key"];
 
@@ -60,7 +63,7 @@ export function bandRow(e: Entry): BandRow {
   const variant: BandCell = { parts: [plain(f.variantShort(i.variant))], sort: i.variant };
   if (!isOk(e)) {
     const none: BandCell = { parts: [plain("–")], sort: -Infinity };
-    return { id: e.id, title: shortTitle(e), ok: false, message: e.message, cells: { gain: none, length, pieces, span: none, bandwidth: none, variant } };
+    return { id: e.id, title: shortTitle(e), ok: false, message: e.message, cells: { gain: none, length, pieces, span: none, bandwidth: none, variant, realized: none, noParts: none } };
   }
   return {
     id: e.id,
@@ -77,10 +80,19 @@ export function bandRow(e: Entry): BandRow {
       },
       bandwidth: { parts: [bandwidthShown(e)], sort: e.sweep.swr2Span?.widthHz ?? 0 },
       variant,
+      ...feedCells(e),
     },
   };
 }
 
+/** Band-table cells for the feed (issue 10): realized gain after the recommended feed, needs no parts. */
+function feedCells(e: Entry): Pick<BandRow["cells"], "realized" | "noParts"> {
+  const g = realizedGainOf(e), none = needsNoPartsOf(e);
+  return {
+    realized: g === null ? { parts: [plain("no feed")], sort: -Infinity } : { parts: [shown(f.gainDbi(g), "feed.realizedGainDbi")], sort: g },
+    noParts: { parts: [plain(none ? "yes" : "no")], sort: none ? "yes" : "no" },
+  };
+}
 
 // ---------------------------------------------------------------- design page
 
