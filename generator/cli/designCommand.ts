@@ -1,16 +1,19 @@
 // `design`: finds the bent-arm shape with the most gain for a frequency, wire length and number of
 // pieces, and reports it like `analyze` does, plus the parameters and the optimizer's record.
 import { SingleBar } from "cli-progress";
+import { suggestMatch } from "../analysis/feedMatch.js";
+import { bandSweep } from "../analysis/sweep.js";
 import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
-import { parseDesignRequest, type DesignRequest } from "../design/request.js";
+import { bandOf, parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { solveShape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { writeFileAtomic } from "../fsAtomic.js";
 import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
 import { DEG_PER_RAD } from "../units.js";
 import { solutionSummary, summaryText } from "./analyzeCommand.js";
-import { fixed, table } from "./format.js";
+import { designText } from "./designText.js";
+import { fixed } from "./format.js";
 
 export interface DesignFlags {
   freqMhz?: number;
@@ -65,7 +68,7 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   const onProgress = (p: DesignProgress) => bar?.update(p.evaluations, { best: p.bestGainDbi === null ? "–" : p.bestGainDbi.toFixed(2) });
   const outcome = designBentArm(request, { onProgress });
   bar?.stop();
-  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} pieces per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
+  const shape = { ...shapeOf(outcome.x, request), name: `${request.lengthWl} λ wire, ${request.piecesPerArm} ${request.piecesPerArm === 1 ? "piece" : "pieces"} per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
   const summary = solutionSummary(solveShape(shape, { energyBalance: true }));
   const parameters = parametersReport(outcome.x, request);
   if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
@@ -85,17 +88,14 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     process.stdout.write(`${JSON.stringify(result)}\n`);
     return;
   }
-  const rows = [["piece", "length (m)", "turn before it (°)"]];
-  parameters.pieceLengthsM.forEach((len, i) => {
-    const turn = i === 0 ? `${fixed(parameters.firstAngleDeg, 1)} from the symmetry axis` : fixed(parameters.bendAnglesDeg[i - 1], 1);
-    rows.push([String(i + 1), fixed(len, 4), turn]);
-  });
+  // feed advice over the band, as `analyze --band-mhz` gives it
+  const bandHz = bandOf(request);
+  const match = suggestMatch(bandSweep(shape, bandHz, request.lineImpedanceOhm), request.frequencyHz, summary.inputImpedanceOhm);
   const lines = [
     `status: ${outcome.status} (${outcome.message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
     summaryText(shape.name, summary),
     "",
-    "right arm, from the feed outward (the left arm is its mirror image):",
-    table(rows),
+    ...designText({ parameters, shape, bandHz, bandGiven: request.bandHz !== undefined, match }),
   ];
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
   if (flags.out) lines.push(`shape written to ${flags.out}`);
