@@ -4,6 +4,7 @@
 // the finder's wire length and near-band frequencies; the printable PDF's pages and 1:1 check bar;
 // the sheet map; compare's messages; and the turnable 3D view. Reuses dist/ when `npm run build`
 // left a matching build there (see harness.ts).
+import { readFile } from "node:fs/promises";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { bendingTemplateSvgs } from "../../generator/export/index.js";
 import { exportShapeOf } from "../../generator/site/downloads.js";
@@ -108,6 +109,12 @@ describe("every page fits a phone and a workbench screen", () => {
         const w = await open(path, width);
         if (path.startsWith("/compare")) await w.page.waitForSelector("[data-compare-out]:not([hidden])");
         if (path.startsWith("/finder")) await w.page.waitForSelector("[data-finder-results][data-ready]");
+        // scroll through so lazy images load (an unloaded one has no size to measure)
+        await w.page.evaluate(async () => {
+          for (let y = 0; y < document.body.scrollHeight; y += 600) { window.scrollTo(0, y); await new Promise((r) => setTimeout(r, 30)); }
+          window.scrollTo(0, 0);
+        });
+        await w.page.waitForLoadState("networkidle");
         await w.page.waitForTimeout(150); // the overflow cue runs on the next animation frame
         const scrollWidth = await w.page.evaluate(() => document.documentElement.scrollWidth);
         expect(scrollWidth, `${path} at ${width} px`).toBeLessThanOrEqual(width);
@@ -260,4 +267,27 @@ describe("the 3D pattern turns", () => {
       await w.page.close();
     });
   }
+});
+
+describe("scale calculator downloads", () => {
+  it("saves the scaled shape file and a template PDF made in the browser", async () => {
+    const w = await open(`/designs/${design.id}/`, 1280);
+    const mhz = (2 * design.inputs.frequencyHz) / 1e6;
+    await w.page.fill("[data-scale-input]", String(mhz));
+    const [shapeDl] = await Promise.all([w.page.waitForEvent("download"), w.page.click("[data-scaled=shape]")]);
+    const shape = JSON.parse(await readFile((await shapeDl.path())!, "utf8")) as { frequencyHz: number; wires: { pointsM: number[][] }[] };
+    expect(shape.frequencyHz).toBeCloseTo(mhz * 1e6, 3);
+    // a free-space wire scaled by f0 / f keeps its behaviour: every coordinate halves at twice the frequency
+    shape.wires[0].pointsM.forEach((p, k) => p.forEach((v, a) => expect(v).toBeCloseTo(design.shape.pointsM[k][a] / 2, 9)));
+    const [pdfDl] = await Promise.all([w.page.waitForEvent("download", { timeout: 30_000 }), w.page.click("[data-scaled=pdf-a4]")]);
+    const pdf = readPdf(new Uint8Array(await readFile((await pdfDl.path())!)));
+    expect(pdf.pages.length).toBeGreaterThan(0);
+    expect(pdf.rects.filter((r) => Math.abs(r.w / PT_PER_MM - 100) < 1e-3 && Math.abs(r.h / PT_PER_MM - 3) < 1e-3)).toHaveLength(pdf.pages.length);
+    const href = new URL((await w.page.getAttribute("[data-designer-link]", "href"))!, server.origin);
+    expect(href.pathname).toBe("/custom/");
+    expect(Number(href.searchParams.get("freqMhz"))).toBeCloseTo(mhz, 3);
+    expect(href.searchParams.get("pieces")).toBe(String(design.inputs.piecesPerArm));
+    expect(w.problems).toEqual([]);
+    await w.page.close();
+  });
 });
