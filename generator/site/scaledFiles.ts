@@ -1,8 +1,7 @@
 // The scale calculator's downloads: the design scaled in every dimension by f_design / f_new (as
 // scale.ts explains), written by the same export code the catalog's own downloads use: a shape file
 // for `bentwire analyze`, node coordinates (CSV), a DXF polyline, and the 1:1 template sheets (the
-// page turns them into one PDF). Also the address of the in-browser designer with the scaled
-// request filled in. Browser-safe: imports no Node module (the export index would bring node:crypto).
+// page turns them into one PDF); designerLink.ts gives the designer's address. Browser-safe: imports no Node module (the export index would bring node:crypto).
 import { nodesCsv } from "../export/csv.js";
 import { wireDxf } from "../export/dxf.js";
 import { bendingTemplateSvgs } from "../export/svgTemplate.js";
@@ -53,23 +52,3 @@ export function scaledFiles(s: ScaleSource, targetHz: number): ScaledFiles {
 
 /** The template sheets of the scaled design for one paper (SVG text, one per sheet). */
 export const scaledSheets = (files: ScaledFiles, paper: PaperName): string[] => bendingTemplateSvgs(files.exportShape, { paper });
-
-/**
- * The in-browser designer's address for this design at the new frequency: the band scaled with the
- * frequency (same relative width), the same wire length in wavelengths, pieces, variant and seed,
- * and the scaled wire diameter. Parameter names are the designer page's.
- */
-export function designerHref(base: string, s: ScaleSource, targetHz: number): string {
-  const k = targetHz / s.frequencyHz;
-  const q = new URLSearchParams({
-    freqMhz: String(Number((targetHz / 1e6).toFixed(4))),
-    bandMhz: `${Number(((s.bandHz[0] * k) / 1e6).toFixed(4))}:${Number(((s.bandHz[1] * k) / 1e6).toFixed(4))}`,
-    lengthWl: String(s.lengthWl),
-    pieces: String(s.piecesPerArm),
-    variant: s.variant,
-    wireDiameterMm: String(Number(((s.wireDiameterM / k) * 1000).toFixed(3))),
-    conductor: s.conductor,
-    seed: String(s.seed),
-  });
-  return `${base}custom/?${q}`;
-}
