@@ -3,6 +3,10 @@
 import { getCollection } from "astro:content";
 import type { Entry } from "../generator/site/catalog";
 import { bandsOf } from "../generator/site/catalog";
+import type { PdfCache } from "../generator/site/downloads";
+
+/** The build's printable PDFs, made once and shared by the pages, the files and the checksum lists. */
+export const pdfCache: PdfCache = new Map();
 
 export async function allEntries(): Promise<Entry[]> {
   const list = await getCollection("entries");

@@ -68,7 +68,7 @@ export function pointsOf(x: number[], r: DesignRequest): number[][] {
   return wirePointsM(unpack(x, r.piecesPerArm), { piecesPerArm: r.piecesPerArm, wireLengthM: r.lengthWl * wavelengthM(r.frequencyHz) });
 }
 
-export function runDesignJob(request: DesignRequest, post: (m: JobMessage) => void, opts: { progressEveryMs?: number; now?: () => number } = {}): void {
+export async function runDesignJob(request: DesignRequest, post: (m: JobMessage) => void, opts: { progressEveryMs?: number; now?: () => number } = {}): Promise<void> {
   const budget = evaluationBudget(request);
   const now = opts.now ?? (() => Date.now());
   const every = opts.progressEveryMs ?? 100;
@@ -112,6 +112,6 @@ export function runDesignJob(request: DesignRequest, post: (m: JobMessage) => vo
   const tables: Tables | null = ok && {
     keyFigures: keyFigures(ok), pieces: pieceRows(ok), vertices: vertexRows(ok), match: matchRows(ok), tolerance: toleranceRows(ok), checks: checkRows(ok),
   };
-  const files = downloadFiles(entry);
+  const files = await downloadFiles(entry, new Map()); // the template PDFs too, made here
   post({ type: "done", result, entry, figures, tables, files, rows: downloadRows(files) });
 }

@@ -1,15 +1,7 @@
 // The readable report of a full analysis: band sweep, feed match, tolerance, pattern, trust.
 import type { Analysis } from "../analysis/index.js";
-import type { MatchComponent } from "../analysis/feedMatch.js";
-import { feedText } from "./feedText.js";
+import { feedLines, feedText } from "./feedText.js";
 import { complexText, fixed, table } from "./format.js";
-
-export function componentText(c: MatchComponent): string {
-  const value = c.kind === "inductor" ? `${fixed(c.value * 1e9, 1)} nH` : `${fixed(c.value * 1e12, 2)} pF`;
-  return `${c.position} ${c.kind} ${value}`;
-}
-
-const range = (xs: number[]) => `${fixed(Math.min(...xs), 2)}–${fixed(Math.max(...xs), 2)}`;
 
 export function analysisText(a: Analysis): string {
   const out: string[] = [];
@@ -22,16 +14,7 @@ export function analysisText(a: Analysis): string {
   out.push(table(rows));
   const span = a.sweep.swr2Span;
   out.push(span ? `SWR ≤ 2 from ${fixed(span.lowHz / 1e6, 3)} to ${fixed(span.highHz / 1e6, 3)} MHz (${fixed(span.widthHz / 1e6, 3)} MHz${span.touchesSweepEdge ? ", at least: reaches the sweep edge" : ""})` : "SWR ≤ 2 nowhere near the design frequency");
-  out.push("", `feed: SWR ${fixed(a.match.swrAtDesign, 2)} at the design frequency`);
-  if (!a.match.needed) out.push("  no matching network needed");
-  a.match.networks.forEach((n, i) => {
-    out.push(`  L-network ${i + 1}: ${n.topology}`);
-    out.push(`    exact: ${n.components.map(componentText).join(", ")}; band SWR ${range(n.bandSwr)}`);
-    out.push(`    E12:   ${n.e12Components.map(componentText).join(", ")}; band SWR ${range(n.bandSwrE12)}`);
-  });
-  const q = a.match.quarterWave;
-  if (q) out.push(`  quarter-wave transformer: ideal ${fixed(q.idealImpedanceOhm, 1)} Ω; use ${q.cable}, ${fixed(q.physicalLengthM, 3)} m at velocity factor ${q.velocityFactor}; band SWR ${range(q.bandSwr)}`);
-  out.push(`  ${a.match.balunNote}`);
+  out.push("", ...feedLines(a.match));
   const t = a.tolerance;
   out.push(
     "",

@@ -2,9 +2,11 @@
 // pieces, and reports it like `analyze` does, plus the parameters and the optimizer's record.
 import { infeasibleMessage } from "../catalog/infeasibleMessage.js";
 import { SingleBar } from "cli-progress";
+import { suggestMatch } from "../analysis/feedMatch.js";
+import { bandSweep } from "../analysis/sweep.js";
 import { designBentArm, type DesignProgress } from "../design/designBentArm.js";
 import { designResult, overGroundReport, parametersReport } from "../design/designResult.js";
-import type { DesignRequest } from "../design/request.js";
+import { bandOf, type DesignRequest } from "../design/request.js";
 import { requestFromInputs } from "../design/requestInput.js";
 import type { Ground } from "../em/ground.js";
 import { InputError } from "../errors.js";
@@ -13,7 +15,8 @@ import { SHAPE_BOUNDS } from "../bounds.js";
 import { wavelengthM } from "../units.js";
 import { summaryText } from "./analyzeCommand.js";
 import { designOffCentreCommand } from "./designOffCentreCommand.js";
-import { fixed, table } from "./format.js";
+import { designText } from "./designText.js";
+import { fixed } from "./format.js";
 import { checkOutputFile } from "./targets.js";
 
 export { parametersReport };
@@ -89,17 +92,14 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     process.stdout.write(`${JSON.stringify(result)}\n`);
     return;
   }
-  const rows = [["piece", "length (m)", "turn before it (°)"]];
-  parameters.pieceLengthsM.forEach((len, i) => {
-    const turn = i === 0 ? `${fixed(parameters.firstAngleDeg, 1)} from the symmetry axis` : fixed(parameters.bendAnglesDeg[i - 1], 1);
-    rows.push([String(i + 1), fixed(len, 4), turn]);
-  });
+  // feed advice over the band, as `analyze --band-mhz` gives it
+  const bandHz = bandOf(request);
+  const match = suggestMatch(bandSweep(shape, bandHz, request.lineImpedanceOhm), request.frequencyHz, result.inputImpedanceOhm);
   const lines = [
     `status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}`,
     summaryText(shape.name, result),
     "",
-    "right arm, from the feed outward (the left arm is its mirror image):",
-    table(rows),
+    ...designText({ parameters, shape, bandHz, bandGiven: request.bandHz !== undefined, match }),
   ];
   const overGround = overGroundReport(request, outcome, shape);
   if (overGround) {

@@ -1,7 +1,12 @@
 // Small number formatting helpers shared by the readable reports.
 import { DEG_PER_RAD } from "../units.js";
 
-export const fixed = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : String(v));
+/** `v` with `digits` decimals; a value that rounds to zero never shows a sign ("-0.0" → "0.0"). */
+export const fixed = (v: number, digits: number): string => {
+  if (!Number.isFinite(v)) return String(v);
+  const text = v.toFixed(digits);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+};
 export const deg = (rad: number): number => round(rad * DEG_PER_RAD, 2);
 export const round = (v: number, digits: number): number => {
   const f = 10 ** digits;

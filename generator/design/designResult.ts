@@ -25,7 +25,7 @@ export function parametersReport(x: number[], r: DesignRequest) {
 /** The shape file of the winning design, named after its request. */
 export function designShape(x: number[], r: DesignRequest) {
   const mountedWords = r.ground ? `, ${r.mounting ?? "horizontal"} over ${r.ground.type} ground` : "";
-  return { ...shapeOf(x, r), name: `${r.lengthWl} λ wire, ${r.piecesPerArm} pieces per arm, ${r.variant}, ${r.frequencyHz / 1e6} MHz${mountedWords}` };
+  return { ...shapeOf(x, r), name: `${r.lengthWl} λ wire, ${r.piecesPerArm} ${r.piecesPerArm === 1 ? "piece" : "pieces"} per arm, ${r.variant}, ${r.frequencyHz / 1e6} MHz${mountedWords}` };
 }
 
 /** Over ground: the mounting, the objective's elevation window and gain in it, the feed height. */

@@ -63,7 +63,7 @@ function feedMark(drawing: TemplateDrawing): string {
       el("path", {
         d: `M${fixed(feed.x - arm, 3)} ${fixed(feed.y, 3)}h${fixed(2 * arm, 3)}M${fixed(feed.x, 3)} ${fixed(feed.y - arm, 3)}v${fixed(2 * arm, 3)}`,
       }) +
-      besideLabel(feed, dir, FEED_RADIUS + 3, "FEED", {
+      besideLabel(feed, dir, FEED_RADIUS + 3, atBend ? `FEED · arms ${fixed(180 - atBend.angleDeg, 1)}° apart` : "FEED", {
         class: "feed-label",
         fill: "#000",
         "font-weight": "bold",
@@ -88,7 +88,11 @@ export function drawingContent(drawing: TemplateDrawing, withGrid: boolean): str
   for (const piece of drawing.pieces) {
     out += pieceLabel(piece.from, piece.to, piece.lengthMm, drawing.centre);
   }
+  // the feed vertex is labelled as the feed (with the angle between the arms), never as a bend;
+  // a vertex where the wire runs on straight (shown as 0.0°) gets no bend label
+  const isFeed = (p: Vec2) => Math.hypot(p.x - drawing.feed.x, p.y - drawing.feed.y) < 1e-6;
   for (const bend of drawing.bends) {
+    if (isFeed(bend.at) || Number(fixed(bend.angleDeg, 1)) === 0) continue;
     out += besideLabel(bend.at, bend.outward, BEND_GAP, `bend ${fixed(bend.angleDeg, 1)}°`, {
       class: "bend-angle",
     });

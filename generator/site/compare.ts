@@ -26,11 +26,12 @@ export function overlayPolarSvg(series: readonly PolarSeries[], title: string, s
   const top = Math.ceil(all.length ? Math.max(...all) : 0);
   const floor = top - RANGE_DB;
   const radius = (g: number) => (Math.max(g, floor) - floor) / RANGE_DB * rMax;
-  // ring labels sit along a spoke 75° clockwise from the top, clear of the lobe label
-  const labelAngle = (75 * Math.PI) / 180;
+  // ring labels sit along a spoke 105° clockwise from the top (just below the right-hand axis, clear
+  // of the main lobe and its label) and carry a paper-coloured halo, so a trace under one stays readable
+  const labelAngle = (105 * Math.PI) / 180;
   const rings = [0, 10, 20, 30].map((d) => {
     const r = radius(top - d);
-    const label = d === 30 ? "" : `<text x="${n(cx + r * Math.sin(labelAngle) + 3)}" y="${n(cy - r * Math.cos(labelAngle) - 3)}" class="ringlabel">${escapeText(f.fixed(top - d, 0))} dBi</text>`;
+    const label = d === 30 ? "" : `<text x="${n(cx + r * Math.sin(labelAngle) + 3)}" y="${n(cy - r * Math.cos(labelAngle) + 12)}" class="ringlabel">${escapeText(f.fixed(top - d, 0))} dBi</text>`;
     return `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(r)}" class="ring"/>` + label;
   }).join("");
   const spokes = Array.from({ length: 12 }, (_, i) => {
@@ -92,4 +93,41 @@ export function idsFromQuery(value: string | null): string[] {
     if (out.length === 3) break;
   }
   return out;
+}
+
+export const MAX_COMPARED = SERIES_CLASSES.length;
+
+export interface CompareRequest {
+  /** Known designs to show, in the order asked, at most MAX_COMPARED. */
+  ids: string[];
+  /** Messages for what was asked but left out (unknown ids, more than MAX_COMPARED); empty when none. */
+  problems: string[];
+}
+
+/**
+ * The designs a compare address asks for, checked against the catalog: unknown or malformed ids and
+ * any beyond the third are named in a message instead of being dropped without a word.
+ */
+export function readCompareIds(value: string | null, known: ReadonlySet<string>): CompareRequest {
+  const asked = (value ?? "").split(",").map((s) => s.trim()).filter((s) => s !== "");
+  const unique = asked.filter((id, i) => asked.indexOf(id) === i);
+  const unknown = unique.filter((id) => !known.has(id));
+  const found = unique.filter((id) => known.has(id));
+  const ids = found.slice(0, MAX_COMPARED);
+  const extra = found.slice(MAX_COMPARED);
+  const problems: string[] = [];
+  const list = (xs: string[]) => xs.map((x) => `“${x.length > 60 ? `${x.slice(0, 60)}…` : x}”`).join(", ");
+  if (unknown.length) problems.push(`${unknown.length === 1 ? "No design has the id" : "No designs have the ids"} ${list(unknown)} in this catalog, so ${unknown.length === 1 ? "it was" : "they were"} left out. Pick designs from the lists above.`);
+  if (extra.length) problems.push(`At most ${MAX_COMPARED} designs can be compared at once: ${list(extra)} ${extra.length === 1 ? "was" : "were"} left out. Drop one of the three to compare ${extra.length === 1 ? "it" : "them"}.`);
+  return { ids, problems };
+}
+
+/** What the band page says when more designs are ticked than the compare page can show. */
+export function tooManyTicked(count: number): string | null {
+  return count > MAX_COMPARED ? `${count} designs are ticked, but at most ${MAX_COMPARED} can be compared at once: untick ${count - MAX_COMPARED === 1 ? "one" : count - MAX_COMPARED} of them.` : null;
+}
+
+/** The label of a design in the compare page's lists: gain first, so a narrow list never hides it. */
+export function optionLabel(d: { gainDbi: number; lengthWl: number; pieces: number; variant: f.Variant }): string {
+  return `${f.gainDbi(d.gainDbi)} · ${f.wavelengths(d.lengthWl)} · ${d.pieces}/arm · ${f.variantShort(d.variant)}`;
 }

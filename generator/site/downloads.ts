@@ -1,14 +1,19 @@
 // The files a builder downloads for one design, as pure functions of its entry: the entry itself,
 // a shape file that `bentwire analyze` reads back, node coordinates (CSV), a DXF polyline for a jig,
-// 1:1 bending templates tiled over A4 and Letter, and a checksum list over all of them.
+// 1:1 bending templates tiled over A4 and Letter (one SVG per sheet, and all sheets of a paper in one
+// printable PDF), and a checksum list over all of them.
 import { serialize } from "../catalog/hash.js";
 import { bendingTemplateSvgs, nodesCsv, planBendingTemplate, sha256Listing, wireDxf, type ExportShape, type PaperName } from "../export/index.js";
+import { templatePdf } from "../export/pdfTemplate.js";
 import { isOk, type Entry, type OkEntry } from "./ok.js";
 
-/** UTF-8 size of a text (TextEncoder: the same in Node and the browser designer). */
-const utf8Bytes = (text: string): number => new TextEncoder().encode(text).length;
+export type DownloadGroup = "entry" | "shape" | "nodes" | "dxf" | "pdf-a4" | "pdf-letter" | "template-a4" | "template-letter" | "checksums";
 
-export type DownloadGroup = "entry" | "shape" | "nodes" | "dxf" | "template-a4" | "template-letter" | "checksums";
+/**
+ * Made PDFs by file name, so the pages, the file endpoint and the checksum lists of one build make
+ * each PDF once. The caller owns it (a Map it keeps for the build).
+ */
+export type PdfCache = Map<string, Promise<Uint8Array>>;
 
 export interface TemplateSheet {
   paper: PaperName;
@@ -31,8 +36,12 @@ export interface DownloadFile {
   /** What the file is, for the download list. */
   label: string;
   mediaType: string;
-  content: string;
+  content: string | Uint8Array;
 }
+
+/** Byte length of a file's content (strings as UTF-8). */
+/** Size in bytes of a text (UTF-8, by TextEncoder: the same in Node and the browser designer) or of binary content. */
+export const contentBytes = (content: string | Uint8Array): number => (typeof content === "string" ? new TextEncoder().encode(content).length : content.byteLength);
 
 /** The shape-file form of a design (our own JSON, metres and hertz) for `bentwire analyze`. */
 export function shapeFileOf(entry: OkEntry) {
@@ -103,8 +112,35 @@ function templateFiles(entry: OkEntry, shape: ExportShape): DownloadFile[] {
   });
 }
 
-/** Every download of a design, the checksum list last. Infeasible entries get their JSON only. */
-export function downloadFiles(entry: Entry): DownloadFile[] {
+/** The SVG sheets of a design's templates alone (no PDF, no checksums), e.g. for its sheet maps. */
+export function templateSheets(entry: Entry): DownloadFile[] {
+  return isOk(entry) ? templateFiles(entry, exportShapeOf(entry)) : [];
+}
+
+/** One PDF per paper holding every sheet of that paper's template, made from the same SVG sheets. */
+async function pdfFiles(entry: OkEntry, sheets: readonly DownloadFile[], cache: PdfCache): Promise<DownloadFile[]> {
+  const out: DownloadFile[] = [];
+  for (const { paper, label } of PAPERS) {
+    const svgs = sheets.filter((f) => f.sheet?.paper === paper);
+    if (svgs.length === 0) continue;
+    const name = `${entry.id}.template-${paper}.pdf`;
+    if (!cache.has(name)) cache.set(name, templatePdf(svgs.map((f) => f.content as string), `${entry.title}: 1:1 bending template, ${label}`));
+    out.push({
+      group: `pdf-${paper}`,
+      name,
+      label: `1:1 bending template, ${label}, ${svgs.length === 1 ? "one page" : `all ${svgs.length} sheets`} in one PDF`,
+      mediaType: "application/pdf",
+      content: await cache.get(name)!,
+    });
+  }
+  return out;
+}
+
+/**
+ * Every download of a design, the checksum list last. Infeasible entries get their JSON only.
+ * Async because the printable PDFs are written by pdf-lib; `cache` keeps them for the build.
+ */
+export async function downloadFiles(entry: Entry, cache: PdfCache): Promise<DownloadFile[]> {
   const files: DownloadFile[] = [
     { group: "entry", name: `${entry.id}.json`, label: "catalog entry (JSON, every figure)", mediaType: "application/json", content: serialize(entry) },
   ];
@@ -114,8 +150,9 @@ export function downloadFiles(entry: Entry): DownloadFile[] {
       { group: "shape", name: `${entry.id}.shape.json`, label: "shape file (loads into bentwire analyze)", mediaType: "application/json", content: shapeFileText(entry) },
       { group: "nodes", name: `${entry.id}.nodes.csv`, label: "node coordinates (CSV, metres and inches)", mediaType: "text/csv", content: nodesCsv(shape) },
       { group: "dxf", name: `${entry.id}.dxf`, label: "polyline for jig cutting (DXF, millimetres)", mediaType: "application/dxf", content: wireDxf(shape) },
-      ...templateFiles(entry, shape),
     );
+    const sheets = templateFiles(entry, shape);
+    files.push(...(await pdfFiles(entry, sheets, cache)), ...sheets);
   }
   files.push({
     group: "checksums",
@@ -128,10 +165,12 @@ export function downloadFiles(entry: Entry): DownloadFile[] {
 }
 
 /** One checksum list over every download of the site, names relative to the site root. */
-export function allChecksums(entries: readonly Entry[], filePath: (id: string, name: string) => string): string {
-  return sha256Listing(
-    entries.flatMap((e) => downloadFiles(e).filter((f) => f.name !== CHECKSUM_FILE).map((f) => ({ name: filePath(e.id, f.name), content: f.content }))),
-  );
+export async function allChecksums(entries: readonly Entry[], filePath: (id: string, name: string) => string, cache: PdfCache): Promise<string> {
+  const all: { name: string; content: string | Uint8Array }[] = [];
+  for (const e of entries) {
+    for (const f of await downloadFiles(e, cache)) if (f.name !== CHECKSUM_FILE) all.push({ name: filePath(e.id, f.name), content: f.content });
+  }
+  return sha256Listing(all);
 }
 
 const GROUP_LABELS: Record<DownloadGroup, string> = {
@@ -139,6 +178,8 @@ const GROUP_LABELS: Record<DownloadGroup, string> = {
   shape: "Shape file (loads into bentwire analyze)",
   nodes: "Node coordinates (CSV, metres and inches)",
   dxf: "Wire polyline for jig cutting (DXF, millimetres)",
+  "pdf-a4": "Printable 1:1 bending template, A4 (one PDF)",
+  "pdf-letter": "Printable 1:1 bending template, US Letter (one PDF)",
   "template-a4": "1:1 bending template, A4",
   "template-letter": "1:1 bending template, US Letter",
   checksums: "SHA-256 checksums of all files above",
@@ -165,12 +206,16 @@ export function downloadRows(files: readonly DownloadFile[]): DownloadRow[] {
       row = { group: f.group, label: GROUP_LABELS[f.group], files: [], bytes: 0, tiledPaper: null };
       rows.push(row);
     }
-    const bytes = utf8Bytes(f.content);
+    const bytes = contentBytes(f.content);
     row.files.push({ name: f.name, linkText: f.sheet?.tiled ? f.sheet.label : f.name, bytes });
     row.bytes += bytes;
     if (f.sheet?.tiled) row.tiledPaper = f.sheet.paper;
   }
   for (const r of rows) {
+    if (r.group.startsWith("pdf-")) {
+      const sheets = files.filter((f) => f.group === r.group.replace("pdf-", "template-")).length;
+      r.label += sheets === 1 ? ", one page" : `, ${sheets} pages to tape together`;
+    }
     if (!r.group.startsWith("template-")) continue;
     if (r.tiledPaper === null) r.label += ", one sheet";
     else r.label += `, ${r.files.length} sheets to tape together`;
@@ -195,7 +240,7 @@ export function sheetMaps(files: readonly DownloadFile[]): SheetMap[] {
     if (sheets.length === 0 || !sheets[0].sheet!.tiled) continue;
     const { rows, columns } = sheets[0].sheet!;
     const cells: SheetMap["cells"] = Array.from({ length: rows }, () => Array.from({ length: columns }, () => null));
-    for (const f of sheets) cells[f.sheet!.row][f.sheet!.column] = { name: f.name, label: f.sheet!.label, bytes: utf8Bytes(f.content) };
+    for (const f of sheets) cells[f.sheet!.row][f.sheet!.column] = { name: f.name, label: f.sheet!.label, bytes: contentBytes(f.content) };
     maps.push({ paper, paperLabel: label, rows, columns, cells });
   }
   return maps;

@@ -4,6 +4,7 @@ import type { Band } from "./catalog.js";
 import { isOk, type Entry } from "./ok.js";
 import { paths } from "./paths.js";
 import { needsNoPartsOf, realizedGainOf } from "./feedRows.js";
+import { fitFrequency } from "./frequencyFit.js";
 
 export type Variant = "max-gain" | "direct-feed";
 
@@ -34,6 +35,8 @@ export interface FinderBand {
   name: string;
   lowHz: number;
   highHz: number;
+  /** The band's regional note, shown when a frequency falls just outside it. */
+  note?: string;
 }
 
 export interface FinderIndex {
@@ -45,7 +48,7 @@ export interface FinderIndex {
 export function finderIndex(bands: readonly Band[], entries: readonly Entry[]): FinderIndex {
   return {
     version: 1,
-    bands: bands.map((b) => ({ id: b.id, name: b.name, lowHz: b.lowHz, highHz: b.highHz })),
+    bands: bands.map((b) => ({ id: b.id, name: b.name, lowHz: b.lowHz, highHz: b.highHz, note: b.note })),
     designs: entries.filter(isOk).map((e) => ({
       id: e.id,
       band: e.inputs.bandId,
@@ -77,18 +80,24 @@ export interface FinderFilters {
   pieces: number | null;
   variant: Variant | null;
   minBandwidthKhz: number | null;
+  /** Longest wire (tip to tip) in `lengthUnit`. */
+  maxLength: number | null;
+  lengthUnit: LengthUnit;
   sort: SortKey;
   /** true: only designs whose recommended feed needs no parts; null: all. */
   noParts?: true | null;
 }
 
+export const LENGTH_UNITS = { m: 1, ft: 0.3048 } as const;
+export type LengthUnit = keyof typeof LENGTH_UNITS;
+
 export const NO_FILTERS: FinderFilters = {
-  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, sort: "gain", noParts: null,
+  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, maxLength: null, lengthUnit: "m", sort: "gain", noParts: null,
 };
 
 /** Query-string names of the filters (also the form field names). */
 export const PARAM = {
-  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", sort: "sort", noParts: "noparts",
+  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", maxLength: "wire", lengthUnit: "unit", sort: "sort", noParts: "noparts",
 } as const;
 
 const num = (text: string | null | undefined): number | null => {
@@ -103,6 +112,7 @@ export function parseFilters(get: (name: string) => string | null | undefined): 
   const variant = get(PARAM.variant);
   const sort = get(PARAM.sort);
   const pieces = num(get(PARAM.pieces));
+  const unit = get(PARAM.lengthUnit);
   return {
     band,
     frequencyMhz: num(get(PARAM.frequencyMhz)),
@@ -111,6 +121,8 @@ export function parseFilters(get: (name: string) => string | null | undefined): 
     pieces: pieces !== null && Number.isInteger(pieces) ? pieces : null,
     variant: variant === "max-gain" || variant === "direct-feed" ? variant : null,
     minBandwidthKhz: num(get(PARAM.minBandwidthKhz)),
+    maxLength: num(get(PARAM.maxLength)),
+    lengthUnit: unit === "ft" ? "ft" : "m",
     sort: (SORTS as readonly string[]).includes(sort ?? "") ? (sort as SortKey) : "gain",
     noParts: get(PARAM.noParts) === "1" ? true : null,
   };
@@ -121,7 +133,7 @@ export function filterParams(fl: FinderFilters): [string, string][] {
   const out: [string, string][] = [];
   for (const key of Object.keys(PARAM) as (keyof FinderFilters)[]) {
     const v = fl[key];
-    if (v === null || v === undefined || (key === "sort" && v === "gain")) continue;
+    if (v === null || v === undefined || (key === "sort" && v === "gain") || (key === "lengthUnit" && (v === "m" || fl.maxLength === null))) continue;
     out.push([PARAM[key], v === true ? "1" : String(v)]);
   }
   return out;
@@ -138,14 +150,12 @@ const ORDER: Record<SortKey, (a: FinderRecord, b: FinderRecord) => number> = {
 
 /** The designs that pass every filter, in the chosen order (ties by id). */
 export function filterDesigns(index: FinderIndex, fl: FinderFilters): FinderRecord[] {
-  const bandEdges = new Map(index.bands.map((b) => [b.id, b]));
-  const hz = fl.frequencyMhz === null ? null : fl.frequencyMhz * 1e6;
+  const fit = fl.frequencyMhz === null ? null : new Set(fitFrequency(index.bands, fl.frequencyMhz * 1e6).bandIds);
+  const maxLengthM = fl.maxLength === null ? null : fl.maxLength * LENGTH_UNITS[fl.lengthUnit];
   const out = index.designs.filter((d) => {
     if (fl.band !== null && d.band !== fl.band) return false;
-    if (hz !== null) {
-      const b = bandEdges.get(d.band);
-      if (!b || hz < b.lowHz || hz > b.highHz) return false;
-    }
+    if (fit !== null && !fit.has(d.band)) return false;
+    if (maxLengthM !== null && !(d.lengthM <= maxLengthM * (1 + 1e-12))) return false;
     if (fl.minGainDbi !== null && !(d.gainDbi >= fl.minGainDbi)) return false;
     if (fl.maxSpanM !== null && !(Math.max(d.spanXM, d.spanYM) <= fl.maxSpanM)) return false;
     if (fl.pieces !== null && d.pieces !== fl.pieces) return false;

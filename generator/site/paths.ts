@@ -22,6 +22,7 @@ export const paths = {
   band: (bandId: string) => `bands/${bandId}/`,
   design: (id: string) => `designs/${id}/`,
   plot: (id: string, file: PlotFile) => `designs/${id}/${file}`,
+  patternGrid: (id: string) => `designs/${id}/pattern-grid.json`,
   thumb: (id: string) => `designs/${id}/thumb.png`,
   card: (id: string) => `designs/${id}/card.png`,
   file: (id: string, name: string) => `designs/${id}/files/${name}`,

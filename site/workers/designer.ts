@@ -6,9 +6,9 @@ import type { DesignRequest } from "../../generator/design/request";
 
 const post = (m: JobMessage) => (self as unknown as Worker).postMessage(m);
 
-self.onmessage = (e: MessageEvent<{ request: DesignRequest }>) => {
+self.onmessage = async (e: MessageEvent<{ request: DesignRequest }>) => {
   try {
-    runDesignJob(e.data.request, post);
+    await runDesignJob(e.data.request, post);
   } catch (err) {
     const input = err instanceof InputError;
     post({ type: "error", message: input ? err.message : `The design stopped on an internal error: ${err instanceof Error ? err.message : String(err)}`, input });

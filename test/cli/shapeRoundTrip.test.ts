@@ -10,7 +10,7 @@ import { describe, expect, it } from "vitest";
 import { bandCheckFrequencies, convergedSolution } from "../../generator/analysis/index.js";
 import { parseShape } from "../../generator/em/index.js";
 import { shapeText } from "../../generator/cli/shapeCommand.js";
-import { downloadFiles } from "../../generator/site/downloads.js";
+import { shapeFileText } from "../../generator/site/downloads.js";
 
 const dir = process.env.BENTWIRE_ROUNDTRIP_ENTRIES ?? "designs/entries";
 const SAMPLE = ["10m-2wl-k1-max-gain", "2m-1.5wl-k3-max-gain", "23cm-1wl-k2-max-gain", "6m-2wl-k3-direct-feed", "70cm-2.5wl-k4-direct-feed"];
@@ -24,7 +24,7 @@ describe("shape file round trip", () => {
     const run = cli("shape", ids[0], "--entries", dir);
     expect(run.status).toBe(0);
     const entry = JSON.parse(readFileSync(join(dir, `${ids[0]}.json`), "utf8"));
-    expect(run.stdout).toBe(downloadFiles(entry).find((f) => f.group === "shape")!.content);
+    expect(run.stdout).toBe(shapeFileText(entry));
     const bad = cli("shape", "no-such-design", "--entries", dir);
     expect(bad.status).toBe(2);
     expect(bad.stderr.trim().split("\n")).toHaveLength(1);

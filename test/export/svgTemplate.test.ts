@@ -57,11 +57,12 @@ describe("one-page bending template", () => {
     const lengths = [...svg.matchAll(/class="piece-length"[^>]*>([^<]*)</g)].map((m) => m[1]);
     expect(lengths).toEqual(["100.1 mm", "93.9 mm", "93.9 mm", "100.1 mm"]);
     const bends = [...svg.matchAll(/class="bend-angle"[^>]*>([^<]*)</g)].map((m) => m[1]);
-    expect(bends).toHaveLength(3);
-    // At the feed the two arms meet at 2·atan(85/40) inside, i.e. 180° − that away from straight.
+    // the two outer bends only: the feed vertex is labelled as the feed, never as a bend
+    expect(bends).toHaveLength(2);
+    // At the feed the two arms meet at 2·atan(85/40) inside (plane geometry of the test shape).
     const inside = (2 * Math.atan2(85, 40) * 180) / Math.PI;
-    expect(bends[1]).toBe(`bend ${(180 - inside).toFixed(1)}°`);
-    expect(svg).toContain('class="feed-label"');
+    const feed = /class="feed-label"[^>]*>([^<]*)</.exec(svg)![1];
+    expect(feed).toBe(`FEED · arms ${inside.toFixed(1)}° apart`);
   });
 
   it("shows the title, the id and a row/column label", () => {

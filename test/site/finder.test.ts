@@ -80,3 +80,21 @@ describe("finder filter", () => {
     expect((performance.now() - t0) / 20).toBeLessThan(20);
   });
 });
+
+describe("finder: wire length and frequencies near a band", () => {
+  it("filters by the longest wire in metres or feet", () => {
+    // 1 ft = 0.3048 m exactly (international foot, 1959 agreement)
+    expect(ids(filterDesigns(index, { ...NO_FILTERS, maxLength: 3.1 }))).toEqual(["c", "a", "b", "d"]);
+    expect(ids(filterDesigns(index, { ...NO_FILTERS, maxLength: 3.0 }))).toEqual([]);
+    expect(ids(filterDesigns(index, { ...NO_FILTERS, maxLength: 10.2, lengthUnit: "ft" }))).toEqual(["c", "a", "b", "d"]); // 3.109 m
+    expect(ids(filterDesigns(index, { ...NO_FILTERS, maxLength: 10, lengthUnit: "ft" }))).toEqual([]); // 3.048 m
+    const q = new URLSearchParams("wire=10&unit=ft");
+    const fl = parseFilters((n) => q.get(n));
+    expect(fl).toMatchObject({ maxLength: 10, lengthUnit: "ft" });
+    expect(filterParams(fl)).toEqual([[PARAM.maxLength, "10"], [PARAM.lengthUnit, "ft"]]);
+  });
+
+  it("offers a band's designs for a frequency just outside it", () => {
+    expect(ids(filterDesigns(index, { ...NO_FILTERS, frequencyMhz: 147 }))).toEqual(["a", "b"]);
+  });
+});

@@ -1,9 +1,9 @@
 // The site's page logic, tested as plain functions over real catalog entries.
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { parseShape } from "../../generator/em/shapeFile.js";
 import { bandsOf, bestOf, checkSiteEntry, totals } from "../../generator/site/catalog.js";
 import { compareRows, escapeText, idsFromQuery, overlayPolarSvg } from "../../generator/site/compare.js";
-import { CHECKSUM_FILE, allChecksums, downloadFiles, downloadRows, shapeFileOf, sheetMaps } from "../../generator/site/downloads.js";
+import { CHECKSUM_FILE, allChecksums, downloadFiles, downloadRows, shapeFileOf, sheetMaps, templateSheets, type DownloadFile, type PdfCache } from "../../generator/site/downloads.js";
 import { svgSize } from "../../generator/site/figures.js";
 import { gainDbi, parseShown, shownDecimals } from "../../generator/site/format.js";
 import { isOk } from "../../generator/site/ok.js";
@@ -87,9 +87,11 @@ describe("tables", () => {
 });
 
 describe("downloads", () => {
-  const files = downloadFiles(ok);
+  const cache: PdfCache = new Map();
+  let files: DownloadFile[] = [];
+  beforeAll(async () => { files = await downloadFiles(ok, cache); });
   it("writes a shape file that the solver's reader accepts, with the entry's geometry", () => {
-    const shape = parseShape(files.find((f) => f.group === "shape")!.content);
+    const shape = parseShape(files.find((f) => f.group === "shape")!.content as string);
     expect(shape.wires[0].pointsM).toEqual(ok.shape.pointsM);
     expect(shape.feed).toEqual({ wire: 0, vertex: ok.shape.feedVertex });
     expect(shape.frequencyHz).toBe(ok.inputs.frequencyHz);
@@ -97,26 +99,26 @@ describe("downloads", () => {
     expect(shapeFileOf(ok).conductor).toBe(ok.inputs.conductor);
   });
 
-  it("lists every file in the checksum file with its SHA-256", () => {
-    const sums = files.find((f) => f.name === CHECKSUM_FILE)!.content.trim().split("\n");
+  it("lists every file in the checksum file with its SHA-256", async () => {
+    const sums = (files.find((f) => f.name === CHECKSUM_FILE)!.content as string).trim().split("\n");
     expect(sums).toHaveLength(files.length - 1);
     for (const f of files.filter((f) => f.name !== CHECKSUM_FILE)) expect(sums).toContain(`${sha256Hex(f.content)}  ${f.name}`);
-    const all = allChecksums([ok], paths.file);
+    const all = await allChecksums([ok], paths.file, cache);
     expect(all).toContain(`  designs/${ok.id}/files/${ok.id}.dxf`);
   });
 
-  it("has an entry, shape, CSV, DXF, A4 and Letter templates, and groups template pages", () => {
+  it("has an entry, shape, CSV, DXF, A4 and Letter templates (PDF and sheets), and groups template pages", () => {
     const groups = new Set(files.map((f) => f.group));
-    for (const g of ["entry", "shape", "nodes", "dxf", "template-a4", "template-letter", "checksums"]) expect(groups).toContain(g);
+    for (const g of ["entry", "shape", "nodes", "dxf", "pdf-a4", "pdf-letter", "template-a4", "template-letter", "checksums"]) expect(groups).toContain(g);
     const rows = downloadRows(files);
-    expect(rows.map((r) => r.group)).toEqual(["entry", "shape", "nodes", "dxf", "template-a4", "template-letter", "checksums"]);
+    expect(rows.map((r) => r.group)).toEqual(["entry", "shape", "nodes", "dxf", "pdf-a4", "pdf-letter", "template-a4", "template-letter", "checksums"]);
     expect(rows.flatMap((r) => r.files)).toHaveLength(files.length);
-    expect(JSON.parse(files[0].content)).toEqual(ok);
+    expect(JSON.parse(files[0].content as string)).toEqual(ok);
   });
 
   it("names tiled template sheets by row and column and maps every sheet once", () => {
     for (const e of entries.filter(isOk)) {
-      const fs = downloadFiles(e);
+      const fs = templateSheets(e);
       const maps = sheetMaps(fs);
       for (const m of maps) {
         const sheets = fs.filter((f) => f.sheet?.paper === m.paper);
@@ -127,9 +129,9 @@ describe("downloads", () => {
     }
   });
 
-  it("gives an infeasible entry its JSON and checksums only", () => {
+  it("gives an infeasible entry its JSON and checksums only", async () => {
     const bad = resealed(ok, (e) => { e.status = "infeasible"; e.shape = null; e.figures = null; });
-    expect(downloadFiles(bad).map((f) => f.group)).toEqual(["entry", "checksums"]);
+    expect((await downloadFiles(bad, cache)).map((f) => f.group)).toEqual(["entry", "checksums"]);
   });
 });
 
