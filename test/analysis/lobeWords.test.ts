@@ -76,8 +76,9 @@ describe("lobe words from the geometry", () => {
       const line = /data-role="lobe-arrow"><line x1="([-\d.]+)" y1="([-\d.]+)" x2="([-\d.]+)" y2="([-\d.]+)"/.exec(shapeSvg(e))!;
       const [x1, y1, x2, y2] = line.slice(1).map(Number);
       // page y runs down: the arrow's page direction is (x, −y) of the lobe's in-plane direction
-      expect(Math.sign(Math.round(x2 - x1))).toBe(Math.sign(Math.round(100 * g.inPlane[0])));
-      expect(Math.sign(Math.round(y1 - y2))).toBe(Math.sign(Math.round(100 * g.inPlane[1])));
+      // (+ 0 turns a −0 from rounding into 0: only the side matters)
+      expect(Math.sign(Math.round(x2 - x1)) + 0).toBe(Math.sign(Math.round(100 * g.inPlane[0])) + 0);
+      expect(Math.sign(Math.round(y1 - y2)) + 0).toBe(Math.sign(Math.round(100 * g.inPlane[1])) + 0);
     }
   });
 });

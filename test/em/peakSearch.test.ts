@@ -49,6 +49,11 @@ describe("peak search against a 1° brute-force search", () => {
       // the mirror image of the best cell, where the other half's maximum lies
       const ours = findPeak(s.farField).intensityWPerSr;
       const scratch = new Float64Array(4);
+      if (entry.family === "off-centre") {
+        // an off-centre-fed shape has no mirror: scan the whole upper hemisphere
+        worstShortfallDb = Math.max(worstShortfallDb, db(bruteForce(s.farField, 90).u) - db(ours));
+        continue;
+      }
       for (const t of [45, 90]) for (let p = 0; p < 360; p += 7) {
         const a = intensityAt(s.farField, t * RAD, p * RAD, scratch), b = intensityAt(s.farField, t * RAD, (180 - p) * RAD, scratch);
         expect(Math.abs(a - b) / ours).toBeLessThan(1e-3);

@@ -62,7 +62,7 @@ function showMessage(text: string | null, key: QueryKey | null = null): void {
 }
 
 function updatePermalink(s: FormState): void {
-  permalink.href = `?${queryOf(s)}`;
+  permalink.href = `${location.pathname}?${queryOf(s)}`; // absolute, so it holds under any sub-path
 }
 
 let worker: Worker | null = null;
