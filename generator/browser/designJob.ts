@@ -112,6 +112,6 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
   const tables: Tables | null = ok && {
     keyFigures: keyFigures(ok), pieces: pieceRows(ok), vertices: vertexRows(ok), match: matchRows(ok), tolerance: toleranceRows(ok), checks: checkRows(ok),
   };
-  const files = await downloadFiles(entry, new Map()); // the template PDFs too, made here
+  const files = await downloadFiles(entry, new Map(), { pdf: false }); // the 1:1 SVG sheets; no PDF in the worker
   post({ type: "done", result, entry, figures, tables, files, rows: downloadRows(files) });
 }

@@ -140,7 +140,8 @@ async function pdfFiles(entry: OkEntry, sheets: readonly DownloadFile[], cache: 
  * Every download of a design, the checksum list last. Infeasible entries get their JSON only.
  * Async because the printable PDFs are written by pdf-lib; `cache` keeps them for the build.
  */
-export async function downloadFiles(entry: Entry, cache: PdfCache): Promise<DownloadFile[]> {
+/** `pdf: false` leaves out the printable PDFs (the in-browser designer offers the SVG sheets only). */
+export async function downloadFiles(entry: Entry, cache: PdfCache, options: { pdf?: boolean } = {}): Promise<DownloadFile[]> {
   const files: DownloadFile[] = [
     { group: "entry", name: `${entry.id}.json`, label: "catalog entry (JSON, every figure)", mediaType: "application/json", content: serialize(entry) },
   ];
@@ -152,7 +153,7 @@ export async function downloadFiles(entry: Entry, cache: PdfCache): Promise<Down
       { group: "dxf", name: `${entry.id}.dxf`, label: "polyline for jig cutting (DXF, millimetres)", mediaType: "application/dxf", content: wireDxf(shape) },
     );
     const sheets = templateFiles(entry, shape);
-    files.push(...(await pdfFiles(entry, sheets, cache)), ...sheets);
+    files.push(...(options.pdf === false ? [] : await pdfFiles(entry, sheets, cache)), ...sheets);
   }
   files.push({
     group: "checksums",

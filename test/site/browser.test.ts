@@ -301,7 +301,7 @@ describe(`site under the sub-path ${SUB}, with hostile entry text`, () => {
     const w = await open(`${SUB}finder/?gain=0`, subServer);
     await w.page.waitForSelector("[data-finder-results][data-ready]");
     expect(await w.page.locator("[data-finder-results] a").count()).toBe(fixtureIds.length - entries.filter((e) => !isOk(e)).slice(0, 1).length);
-    await w.page.fill("input[name=q]", design.inputs.bandName);
+    await w.page.fill("input[name=q]", okEntries[0].inputs.bandName); // a band the sub-path fixture holds
     await w.page.waitForFunction(() => document.querySelectorAll("[data-search-results] li").length > 0, undefined, { timeout: 15_000 });
     const urls = await w.page.$$eval("[data-search-results] a", (as) => as.map((a) => a.getAttribute("href")!));
     for (const u of urls) expect(u.startsWith(SUB)).toBe(true);

@@ -117,7 +117,9 @@ describe("designer page", () => {
     const links = await page.page.$$eval("[data-result] a[data-download]", (as) => as.map((a) => a.getAttribute("download")!));
     const files = new Map<string, string>();
     for (const name of links) {
-      const [dl] = await Promise.all([page.page.waitForEvent("download"), page.page.click(`a[download="${name}"]`)]);
+      const [dl] = await Promise.all([page.page.waitForEvent("download", { timeout: 30_000 }), page.page.click(`a[download="${name}"]`)]).catch((err) => {
+        throw new Error(`download of ${name} (${links.indexOf(name) + 1} of ${links.length}): ${(err as Error).message.split("\n")[0]}`);
+      });
       files.set(name, readFileSync((await dl.path())!, "utf8"));
     }
     const id = links.find((n) => n.endsWith(".shape.json"))!.replace(/\.shape\.json$/, "");
