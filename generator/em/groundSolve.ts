@@ -8,7 +8,7 @@ import { DEG_PER_RAD, RAD_PER_DEG, toDb } from "../units.js";
 import type { Ground } from "./ground.js";
 import { createGroundFarField, type GroundFarField } from "./groundFarField.js";
 import { findGroundPeak, integrateUpperHalf, intensityAtElevation } from "./groundPattern.js";
-import type { Mesh } from "./mesh.js";
+import { maxRadiusM, type Mesh } from "./mesh.js";
 import type { Shape } from "./shapeFile.js";
 import type { FeedSolution, Solution, SolveOptions } from "./solve.js";
 import { DEFAULT_PEAK_OPTIONS, patternPointsFor, type PeakOptions } from "./pattern.js";
@@ -125,15 +125,3 @@ export function solutionOverGround(shape: Shape, feed: FeedSolution, options: So
   };
 }
 
-/** Largest distance of any segment end from the origin (the image lies as far out). */
-function maxRadiusM(mesh: Mesh): number {
-  let r = 0;
-  for (let s = 0; s < mesh.segmentCount; s++) {
-    for (const t of [0, 1]) {
-      let d2 = 0;
-      for (let c = 0; c < 3; c++) d2 += (mesh.start[3 * s + c] + t * mesh.dir[3 * s + c] * mesh.lengthM[s]) ** 2;
-      r = Math.max(r, Math.sqrt(d2));
-    }
-  }
-  return r;
-}

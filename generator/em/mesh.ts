@@ -151,3 +151,16 @@ export function segmentEndCurrents(
   const b = mesh.basisAtEnd[s];
   return [a >= 0 ? re[a] : 0, a >= 0 ? im[a] : 0, b >= 0 ? re[b] : 0, b >= 0 ? im[b] : 0];
 }
+
+/** Largest distance of any segment end from the origin (sets the pattern's angular detail; an image in z = 0 lies as far out). */
+export function maxRadiusM(mesh: Mesh): number {
+  let r = 0;
+  for (let s = 0; s < mesh.segmentCount; s++) {
+    for (const t of [0, 1]) {
+      let d2 = 0;
+      for (let c = 0; c < 3; c++) d2 += (mesh.start[3 * s + c] + t * mesh.dir[3 * s + c] * mesh.lengthM[s]) ** 2;
+      r = Math.max(r, Math.sqrt(d2));
+    }
+  }
+  return r;
+}

@@ -12,7 +12,7 @@ import { fillImpedanceMirror, solveImpedanceSystem } from "./mirrorSolve.js";
 import { detectMirrorSymmetry } from "./mirrorSymmetry.js";
 import { addConductorLoss, fillImpedance, surfaceResistancePerM } from "./impedance.js";
 import { KERNEL_RULES, type KernelRules } from "./kernel.js";
-import { buildMesh, segmentEndCurrents, type Mesh } from "./mesh.js";
+import { buildMesh, maxRadiusM, segmentEndCurrents, type Mesh } from "./mesh.js";
 import { imageFactor } from "./ground.js";
 import { addImageCoupling } from "./groundImage.js";
 import { withGroundedEnds } from "./groundMesh.js";
@@ -169,15 +169,3 @@ function conductorLossW(mesh: Mesh, re: Float64Array, im: Float64Array, rPerM: F
   return 0.5 * p;
 }
 
-/** Largest distance of any segment end from the origin (sets the pattern's angular detail). */
-function maxRadiusM(mesh: Mesh): number {
-  let r = 0;
-  for (let s = 0; s < mesh.segmentCount; s++) {
-    for (const t of [0, 1]) {
-      let d2 = 0;
-      for (let c = 0; c < 3; c++) d2 += (mesh.start[3 * s + c] + t * mesh.dir[3 * s + c] * mesh.lengthM[s]) ** 2;
-      r = Math.max(r, Math.sqrt(d2));
-    }
-  }
-  return r;
-}
