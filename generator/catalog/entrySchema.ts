@@ -11,6 +11,7 @@ export const ENTRY_SCHEMA_VERSION = 1;
 export function makeEntrySchema(z: Z) {
   const num = z.number();
   const complex = z.object({ re: num, im: num }).strict();
+  const groundValue = z.object({ type: z.enum(["perfect", "real"]), relativePermittivity: num.optional(), conductivitySPerM: num.optional() }).strict();
   const percentiles = z.object({ p5: num.nullable(), p50: num.nullable(), p95: num.nullable() }).strict();
   const component = z.object({ kind: z.enum(["inductor", "capacitor"]), position: z.enum(["series", "shunt"]), value: num }).strict();
   const inputs = z.object({
@@ -31,6 +32,18 @@ export function makeEntrySchema(z: Z) {
     seed: z.number().int(),
     segmentsPerWavelength: num,
     tolerance: z.object({ samples: z.number().int(), bendSigmaDeg: num, lengthSigmaFraction: num }).strict(),
+    // over ground (issue 13): absent means free space, as every entry before it
+    overGround: z.object({
+      /** Preset name of the ground the design was made over ("average" by default). */
+      groundName: z.string(),
+      ground: groundValue,
+      /** The support height the cell asks for: the wire plane (horizontal) or the feed at the mast top (vertical). */
+      heightM: num,
+      mounting: z.enum(["horizontal", "vertical"]),
+      purpose: z.enum(["long-distance", "near-vertical"]),
+      /** Elevation window the purpose plans with, degrees above the horizon (long-distance 5–25, near-vertical 60–90). */
+      elevationWindowDeg: z.tuple([num, num]),
+    }).strict().optional(),
   }).strict();
   const shape = z.object({
     pointsM: z.array(z.tuple([num, num, num])),
@@ -160,6 +173,45 @@ export function makeEntrySchema(z: Z) {
     }).strict(),
     verdict: z.object({ sensitive: z.boolean(), words: z.string() }).strict(),
   }).strict();
+  // over ground (issue 13). Conventions for entries over ground: shape.pointsM stays the drawing in the
+  // x–y plane (feed at the origin, as for free space); mountedPointsM holds the wire as hung (z up,
+  // ground at z = 0) and is what the downloadable shape file carries, with the ground.
+  // figures.gainDbi is the gain at the takeoff direction (the best within the purpose's elevation
+  // window), figures.peakDirection that direction as θ from the zenith and φ; the sweep's gainDbi
+  // is the same window gain per frequency, its impedance and SWR those at the cell's height.
+  const groundFigures = z.object({
+    gainDbi: num,
+    takeoffElevationDeg: num,
+    impedanceOhm: complex,
+    swr: num.nullable(),
+  }).strict();
+  const overGround = z.object({
+    mountedPointsM: z.array(z.tuple([num, num, num])),
+    /** Feed-point height, lowest and highest wire point above the ground (m). */
+    feedHeightM: num,
+    lowestPointM: num,
+    highestPointM: num,
+    /** Best gain in the whole upper half-space and where it points (it may lie outside the window). */
+    peakGainDbi: num,
+    peakElevationDeg: num,
+    peakAzimuthDeg: num,
+    /** The takeoff: the strongest direction inside the elevation window (= figures.gainDbi). */
+    takeoffElevationDeg: num,
+    takeoffAzimuthDeg: num,
+    gainAtElevationDbi: z.array(z.object({ elevationDeg: num, gainDbi: num }).strict()),
+    /** Gain every stepDeg from the horizon (0°) to the zenith (90°) in the vertical plane through the takeoff azimuth, and on to 180° (the far side). */
+    elevationCut: z.object({ azimuthDeg: num, stepDeg: num, gainDbi: z.array(num) }).strict(),
+    /** Gain every stepDeg of azimuth from 0° to 360° (exclusive) at the takeoff elevation. */
+    azimuthCut: z.object({ elevationDeg: num, stepDeg: num, gainDbi: z.array(num) }).strict(),
+    /** Fraction of the input power absorbed by the ground (null over perfect ground). */
+    groundLossFraction: num.nullable(),
+    /** The same shape at neighbouring support heights, same ground ("what if my mast is 3 m lower"). */
+    heightCurve: z.array(groundFigures.extend({ heightM: num })),
+    /** The same shape at the same height over other grounds (poor, good). */
+    otherGrounds: z.array(groundFigures.extend({ groundName: z.string() })),
+    /** The same shape in free space, for comparison. */
+    freeSpace: z.object({ gainDbi: num, impedanceOhm: complex }).strict(),
+  }).strict();
   return z.object({
     schemaVersion: z.literal(ENTRY_SCHEMA_VERSION),
     id: z.string().regex(/^[a-z0-9][a-z0-9.-]*$/),
@@ -179,6 +231,8 @@ export function makeEntrySchema(z: Z) {
     pattern: pattern.nullable(),
     checks: checks.nullable(),
     feed: feed.nullable().optional(),
+    /** Over-ground figures (issue 13); absent for free-space entries, null when no shape was found. */
+    overGround: overGround.nullable().optional(),
     optimizer,
     contentHash: z.string().regex(/^[0-9a-f]{64}$/),
   }).strict();
