@@ -12,6 +12,10 @@
 // R_v = 0 at the Brewster angle tanψ_B = 1/√ε_r. Below the horizon (θ > 90°) the field is zero.
 // Limits of the model: no surface wave, and the plane-wave coefficients are approximate for
 // sources within a small fraction of a wavelength of real ground.
+// A level shape (every node at one height h, so every segment horizontal) has the image field
+//   E_image = −e^{−j2kh cosθ} E_direct
+// (the mirrored nodes sit 2h lower, the horizontal segment vectors are unchanged, the currents
+// reversed): one far-field sum per direction instead of two.
 import { ETA0_OHM } from "../units.js";
 import { createFarFieldPlan, farFieldAt, type FarFieldPlan } from "./farField.js";
 import { cdiv, cmul, complexPermittivity, csqrt, type Complex, type Ground } from "./ground.js";
@@ -20,7 +24,10 @@ import type { Mesh } from "./mesh.js";
 
 export interface GroundFarField {
   direct: FarFieldPlan;
-  image: FarFieldPlan;
+  /** The image's own plan; null for a level shape (levelHeightM set). */
+  image: FarFieldPlan | null;
+  /** The common node height (m) of a level shape, else null. */
+  levelHeightM: number | null;
   /** ε_c for real ground, null for perfect. */
   permittivity: Complex | null;
   scratch: Float64Array;
@@ -36,13 +43,24 @@ export function fresnelCoefficients(permittivity: Complex, elevationRad: number)
   return { v, h };
 }
 
+/** The common height of every node when the shape is level (to 1e-12 of that height), else null. */
+export function levelHeightOf(plan: FarFieldPlan): number | null {
+  const z = plan.nodeXyz;
+  const h = z[2];
+  for (let i = 1; i < plan.nodeCount; i++) if (Math.abs(z[3 * i + 2] - h) > 1e-12 * Math.abs(h)) return null;
+  return h > 0 ? h : null;
+}
+
+/** `level: false` keeps the image's own plan even for a level shape (a check of the shortcut). */
 export function createGroundFarField(
-  mesh: Mesh, re: Float64Array, im: Float64Array, kRadPerM: number, ground: Ground, frequencyHz: number,
+  mesh: Mesh, re: Float64Array, im: Float64Array, kRadPerM: number, ground: Ground, frequencyHz: number, level = true,
 ): GroundFarField {
-  const nre = re.map((v) => -v), nim = im.map((v) => -v);
+  const direct = createFarFieldPlan(mesh, re, im, kRadPerM);
+  const levelHeightM = level ? levelHeightOf(direct) : null;
   return {
-    direct: createFarFieldPlan(mesh, re, im, kRadPerM),
-    image: createFarFieldPlan(mirroredMesh(mesh), nre, nim, kRadPerM),
+    direct,
+    image: levelHeightM === null ? createFarFieldPlan(mirroredMesh(mesh), re.map((v) => -v), im.map((v) => -v), kRadPerM) : null,
+    levelHeightM,
     permittivity: ground.type === "real" ? complexPermittivity(ground, frequencyHz) : null,
     scratch: new Float64Array(4),
   };
@@ -53,7 +71,15 @@ export function groundFieldAt(g: GroundFarField, thetaRad: number, phiRad: numbe
   if (thetaRad > Math.PI / 2) { out.fill(0); return; }
   farFieldAt(g.direct, thetaRad, phiRad, out);
   const im = g.scratch;
-  farFieldAt(g.image, thetaRad, phiRad, im);
+  if (g.image) farFieldAt(g.image, thetaRad, phiRad, im);
+  else { // level shape: E_image = −e^{−ja} E_direct, a = 2kh cosθ
+    const a = 2 * g.direct.kRadPerM * g.levelHeightM! * Math.cos(thetaRad);
+    const c = Math.cos(a), s = Math.sin(a);
+    for (let t = 0; t < 4; t += 2) {
+      im[t] = -(c * out[t] + s * out[t + 1]);
+      im[t + 1] = -(c * out[t + 1] - s * out[t]);
+    }
+  }
   let rv: Complex = { re: 1, im: 0 }, rh: Complex = { re: 1, im: 0 };
   if (g.permittivity) ({ v: rv, h: rh } = fresnelCoefficients(g.permittivity, Math.PI / 2 - thetaRad));
   const et = cmul(rv, { re: im[0], im: im[1] });

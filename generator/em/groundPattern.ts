@@ -5,10 +5,17 @@
 //   P = ∫_0^{2π} ∫_0^1 U d(cosθ) dφ, Gauss–Legendre in cosθ ∈ [0, 1], trapezoid rule in φ.
 // Over perfect ground the field is that of the shape and its image in free space, symmetric about
 // z = 0, so the half-space integrand is smooth and the rule converges as fast as on the full sphere.
+// Grid symmetry: a vertical symmetry plane of the shape and its currents (patternSymmetry.ts: a
+// mirror plane, or the wire's own plane), with horizontal normal at azimuth α, is one of the shape
+// with its image too, and the Fresnel factors depend on elevation alone, so U(ψ, 2α + π − φ) =
+// U(ψ, φ). Where that reflection maps the azimuth grid onto itself, mirrored grid values are
+// copied, and of two mirrored grid maxima only the first (lower index) is refined. The zenith is
+// one direction: its grid row is one sample.
 import { RAD_PER_DEG } from "../units.js";
 import { gaussLegendre01 } from "./gaussLegendre.js";
 import { groundIntensityAt, type GroundFarField } from "./groundFarField.js";
 import type { PeakOptions } from "./pattern.js";
+import { symmetryPlanes } from "./patternSymmetry.js";
 
 export interface GroundPeak {
   elevationRad: number;
@@ -23,9 +30,24 @@ export function intensityAtElevation(g: GroundFarField, elevationRad: number, az
   return groundIntensityAt(g, HALF_PI - elevationRad, azimuthRad, out);
 }
 
-/** Strongest direction with elevation in [lo, hi] (rad), 0 ≤ lo ≤ hi ≤ π/2. */
+/**
+ * Azimuth grid reflections j → (shift − j) mod np that leave U unchanged: one per vertical
+ * symmetry plane whose reflection maps the grid of np azimuths onto itself.
+ */
+export function azimuthGridReflections(g: GroundFarField, np: number): number[] {
+  const shifts: number[] = [];
+  for (const { normal } of symmetryPlanes(g.direct)) {
+    if (Math.abs(normal[2]) > 1e-9) continue;
+    const s = ((2 * Math.atan2(normal[1], normal[0]) + Math.PI) * np) / (2 * Math.PI);
+    const r = Math.round(s);
+    if (Math.abs(s - r) < 1e-9) shifts.push(((r % np) + np) % np);
+  }
+  return shifts;
+}
+
+/** Strongest direction with elevation in [lo, hi] (rad), 0 ≤ lo ≤ hi ≤ π/2; `symmetric: false` folds no grid. */
 export function findGroundPeak(
-  g: GroundFarField, options: PeakOptions, elevationWindowRad: [number, number] = [0, HALF_PI],
+  g: GroundFarField, options: PeakOptions, elevationWindowRad: [number, number] = [0, HALF_PI], symmetric = true,
 ): GroundPeak {
   const [lo, hi] = elevationWindowRad;
   const out = new Float64Array(4);
@@ -33,11 +55,21 @@ export function findGroundPeak(
   const he = (hi - lo) / ne;
   const np = Math.ceil(360 / options.gridStepDeg);
   const hp = (2 * Math.PI) / np;
+  const shifts = symmetric ? azimuthGridReflections(g, np) : [];
+  const mirrorOf = (j: number, s: number) => (s - j + np) % np;
+  const zenithRow = (i: number) => symmetric && lo + i * he >= HALF_PI - 1e-12;
   const u = new Float64Array((ne + 1) * np);
-  for (let i = 0; i <= ne; i++) for (let j = 0; j < np; j++) u[i * np + j] = intensityAtElevation(g, lo + i * he, j * hp, out);
+  for (let i = 0; i <= ne; i++) {
+    for (let j = 0; j < np; j++) {
+      let from = zenithRow(i) && j > 0 ? 0 : -1;
+      for (let t = 0; t < shifts.length && from < 0; t++) if (mirrorOf(j, shifts[t]) < j) from = mirrorOf(j, shifts[t]);
+      u[i * np + j] = from >= 0 ? u[i * np + from] : intensityAtElevation(g, lo + i * he, j * hp, out);
+    }
+  }
   const maxima: number[] = [];
   for (let i = 0; i <= ne; i++) {
     for (let j = 0; j < np; j++) {
+      if (zenithRow(i) && j > 0) continue; // one direction
       const v = u[i * np + j];
       let isMax = true;
       for (let di = -1; di <= 1 && isMax; di++) {
@@ -51,9 +83,17 @@ export function findGroundPeak(
     }
   }
   maxima.sort((a, b) => u[b] - u[a] || a - b);
+  // one of each mirrored pair (the first in this order: the lower index, the values being copies)
+  const starts: number[] = [];
+  for (const idx of maxima) {
+    if (starts.length === options.candidates) break;
+    const i = Math.floor(idx / np), j = idx % np;
+    if (starts.some((k) => Math.floor(k / np) === i && shifts.some((s) => mirrorOf(j, s) === k % np))) continue;
+    starts.push(idx);
+  }
   let best: GroundPeak = { elevationRad: lo, azimuthRad: 0, intensityWPerSr: -1 };
   const stop = options.refineToDeg * RAD_PER_DEG;
-  for (const idx of maxima.slice(0, options.candidates)) {
+  for (const idx of starts) {
     let el = lo + Math.floor(idx / np) * he, az = (idx % np) * hp, value = u[idx];
     for (let step = Math.max(he, hp) / 2; step >= stop; step /= 2) {
       for (let tries = 0; tries < 6; tries++) {

@@ -99,7 +99,7 @@ export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolutio
   const sym = options.symmetry === false ? null : detectMirrorSymmetry(mesh); // dispatch: mirrorSolve.ts
   const z = sym ? fillImpedanceMirror(mesh, k, sym, options.rules) : fillImpedance(mesh, k, options.rules ?? KERNEL_RULES);
   // the image in z = 0 commutes with the y–z mirror, so the even-mode solve below still holds
-  if (shape.ground) addImageCoupling(z, mesh, k, imageFactor(shape.ground, shape.frequencyHz), options.rules ?? KERNEL_RULES);
+  if (shape.ground) addImageCoupling(z, mesh, k, imageFactor(shape.ground, shape.frequencyHz), options.rules ?? KERNEL_RULES, sym);
   const sigma = conductivityOf(shape.conductor);
   const rPerM = new Float64Array(mesh.segmentCount);
   if (Number.isFinite(sigma)) {
