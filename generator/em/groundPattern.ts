@@ -10,7 +10,8 @@
 // with its image too, and the Fresnel factors depend on elevation alone, so U(ψ, 2α + π − φ) =
 // U(ψ, φ). Where that reflection maps the azimuth grid onto itself, mirrored grid values are
 // copied, and of two mirrored grid maxima only the first (lower index) is refined. The zenith is
-// one direction: its grid row is one sample.
+// one direction: its grid row is one sample. The compass search skips trial points that are no new
+// direction (clamped onto the current point, an azimuth step at the zenith, the point just left).
 import { RAD_PER_DEG } from "../units.js";
 import { gaussLegendre01 } from "./gaussLegendre.js";
 import { groundIntensityAt, type GroundFarField } from "./groundFarField.js";
@@ -96,13 +97,17 @@ export function findGroundPeak(
   for (const idx of starts) {
     let el = lo + Math.floor(idx / np) * he, az = (idx % np) * hp, value = u[idx];
     for (let step = Math.max(he, hp) / 2; step >= stop; step /= 2) {
+      let fromEl = NaN, fromAz = NaN; // the point the last move left, known to be lower
       for (let tries = 0; tries < 6; tries++) {
         let moved = false;
         for (const [de, da] of [[1, 0], [-1, 0], [0, 1], [0, -1]]) {
           const e = Math.min(hi, Math.max(lo, el + de * step));
           const a = az + (da * step) / Math.max(Math.cos(e), 0.05);
+          // no new direction: clamped onto the current point, an azimuth step at the zenith, or back
+          if ((da === 0 && e === el) || (e === el && el >= HALF_PI - 1e-12)) continue;
+          if (Math.abs(e - fromEl) <= 1e-12 && Math.abs(a - fromAz) <= 1e-12) continue;
           const val = intensityAtElevation(g, e, a, out);
-          if (val > value) { el = e; az = a; value = val; moved = true; break; }
+          if (val > value) { fromEl = el; fromAz = az; el = e; az = a; value = val; moved = true; break; }
         }
         if (!moved) break;
       }
