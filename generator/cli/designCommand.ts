@@ -15,6 +15,7 @@ import { SHAPE_BOUNDS } from "../bounds.js";
 import { wavelengthM } from "../units.js";
 import { summaryText } from "./analyzeCommand.js";
 import { designOffCentreCommand } from "./designOffCentreCommand.js";
+import { overGroundLines, reportUnsolvable, shapeFileLines, writesShape } from "./designOutput.js";
 import { designText } from "./designText.js";
 import { fixed } from "./format.js";
 import { checkOutputFile } from "./targets.js";
@@ -62,10 +63,7 @@ export function requestFromFlags(flags: DesignFlags): DesignRequest {
 export async function designCommand(flags: DesignFlags): Promise<void> {
   const request = requestFromFlags(flags);
   if (flags.out !== undefined) await checkOutputFile("--out", flags.out); // before the search, not after it
-  if (flags.family === "off-centre") {
-    if (request.ground) throw new InputError("design: --family off-centre is computed in free space only for now; leave out --ground and --height-m");
-    return designOffCentreCommand(request, flags);
-  }
+  if (flags.family === "off-centre") return designOffCentreCommand(request, flags);
   const bar = process.stderr.isTTY && !flags.json ? new SingleBar({ format: "designing [{bar}] {value}/{total} evaluations, best {best} dBi", stream: process.stderr, hideCursor: true }) : null;
   const budget = request.maxEvaluations ?? 500 * (2 * request.piecesPerArm - 1) + 500;
   bar?.start(budget + 60 * (2 * request.piecesPerArm - 1), 0, { best: "–" });
@@ -79,14 +77,11 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
   try {
     result = designResult(request, outcome, message);
   } catch (err) {
-    // an infeasible best shape may be one the solver refuses (wires touching): report the search alone
     if (feasible || !(err instanceof InputError)) throw err;
-    if (flags.json) process.stdout.write(`${JSON.stringify({ status: outcome.status, message, evaluations: outcome.evaluations, seed: request.seed, stopReasons: outcome.stopReasons })}\n`);
-    else process.stdout.write(`status: ${outcome.status} (${message}); ${outcome.evaluations} evaluations, seed ${request.seed}\n${flags.out ? "no shape file written: the best shape found cannot be solved\n" : ""}`);
-    return;
+    return reportUnsolvable(flags, outcome, message, request.seed);
   }
   const { shape, parameters } = result;
-  const written = flags.out !== undefined && (feasible || flags.keepInfeasible === true);
+  const written = writesShape(flags, feasible);
   if (written) await writeFileAtomic(flags.out!, `${JSON.stringify(shape, null, 2)}\n`);
   if (flags.json) {
     process.stdout.write(`${JSON.stringify(result)}\n`);
@@ -101,14 +96,8 @@ export async function designCommand(flags: DesignFlags): Promise<void> {
     "",
     ...designText({ parameters, shape, bandHz, bandGiven: request.bandHz !== undefined, match }),
   ];
-  const overGround = overGroundReport(request, outcome, shape);
-  if (overGround) {
-    const [lo, hi] = overGround.elevationWindowDeg;
-    if (overGround.mounting === "vertical") lines.push("vertical mounting: the wire hangs in a vertical plane and the symmetry axis points straight down from the feed");
-    lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
-  }
+  lines.push(...overGroundLines(request, overGroundReport(request, outcome, shape)));
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
-  if (written) lines.push(`shape written to ${flags.out}`);
-  else if (flags.out !== undefined) lines.push(`no shape file written: no shape met every limit (add --keep-infeasible to write it anyway)`);
+  lines.push(...shapeFileLines(flags, written));
   process.stdout.write(`${lines.join("\n")}\n`);
 }

@@ -1,6 +1,8 @@
 // `design --family off-centre`: finds the off-centre-fed bent wire with the most gain (for
 // direct-feed: within the SWR limit across the band) and reports it like `design` does, plus where
-// the feed sits and the choke an unbalanced feed needs.
+// the feed sits and the choke an unbalanced feed needs. Over ground (--ground, --height-m,
+// --mounting, --objective) the shape is mounted and scored as the centre-fed family's is. No
+// feasible shape: exit status 3, and --out is written only with --keep-infeasible (as `design`).
 import { designOffCentre, offCentreShapeOf } from "../design/designOffCentre.js";
 import type { DesignRequest } from "../design/request.js";
 import { OFF_CENTRE_FEED_NOTE } from "../analysis/feedOptionsStock.js";
@@ -9,7 +11,11 @@ import { writeFileAtomic } from "../fsAtomic.js";
 import { armLengthsM, armPieceLengthsM, unpackOffCentre } from "../shapes/offCentre.js";
 import { offCentreSpecOf } from "../design/offCentreObjective.js";
 import { DEG_PER_RAD } from "../units.js";
+import { overGroundReport } from "../design/designResult.js";
+import { InputError } from "../errors.js";
 import { solutionSummary, summaryText } from "./analyzeCommand.js";
+import { INFEASIBLE_EXIT } from "./designCommand.js";
+import { overGroundLines, reportUnsolvable, shapeFileLines, writesShape } from "./designOutput.js";
 import { fixed, table } from "./format.js";
 
 /** The parameters in the units a builder reads. */
@@ -33,14 +39,24 @@ export function offCentreParametersReport(x: number[], r: DesignRequest) {
   };
 }
 
-export async function designOffCentreCommand(request: DesignRequest, flags: { json?: boolean; out?: string }): Promise<void> {
+export async function designOffCentreCommand(request: DesignRequest, flags: { json?: boolean; out?: string; keepInfeasible?: boolean }): Promise<void> {
   const outcome = designOffCentre(request);
+  const feasible = outcome.status === "ok";
+  if (!feasible) process.exitCode = INFEASIBLE_EXIT;
   const shape = { ...offCentreShapeOf(outcome.x, request), name: `${request.lengthWl} λ wire fed off centre, ${request.piecesPerArm === 1 ? "1 piece" : `${request.piecesPerArm} pieces`} per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };
   // the figures converged as `analyze` reports them (the search itself runs on the starting mesh)
-  const { solution, refinement } = convergedSolution(shape);
-  const summary = solutionSummary(solution, refinement);
+  let converged;
+  try {
+    converged = convergedSolution(shape);
+  } catch (err) {
+    if (feasible || !(err instanceof InputError)) throw err;
+    return reportUnsolvable(flags, outcome, outcome.message, request.seed);
+  }
+  const summary = solutionSummary(converged.solution, converged.refinement);
   const parameters = offCentreParametersReport(outcome.x, request);
-  if (flags.out) await writeFileAtomic(flags.out, `${JSON.stringify(shape, null, 2)}\n`);
+  const overGround = overGroundReport(request, outcome, shape);
+  const written = writesShape(flags, feasible);
+  if (written) await writeFileAtomic(flags.out!, `${JSON.stringify(shape, null, 2)}\n`);
   const result = {
     status: outcome.status,
     message: outcome.message,
@@ -53,6 +69,7 @@ export async function designOffCentreCommand(request: DesignRequest, flags: { js
     evaluations: outcome.evaluations,
     seed: request.seed,
     stopReasons: outcome.stopReasons,
+    ...overGround,
     shape,
   };
   if (flags.json) {
@@ -74,8 +91,8 @@ export async function designOffCentreCommand(request: DesignRequest, flags: { js
     "long arm, from the feed outward:",
     armRows("long", parameters.longArm),
   ];
+  lines.push(...overGroundLines(request, overGround));
   if (outcome.evaluation.maxSwr !== null) lines.push(`highest SWR in the band: ${fixed(outcome.evaluation.maxSwr, 2)} re ${request.lineImpedanceOhm} Ω`);
-  lines.push("", OFF_CENTRE_FEED_NOTE);
-  if (flags.out) lines.push(`shape written to ${flags.out}`);
+  lines.push("", OFF_CENTRE_FEED_NOTE, ...shapeFileLines(flags, written));
   process.stdout.write(`${lines.join("\n")}\n`);
 }

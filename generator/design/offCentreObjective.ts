@@ -3,6 +3,8 @@
 //   geometry infeasible       → 1000 + violation          (no solve)
 //   direct-feed, SWR too high → 100 + (SWR_max − limit)
 //   feasible                  → −G_peak (dBi)
+// Over ground the shape is mounted and scored as the centre-fed family's is (groundObjective.ts:
+// gain 4πU/P_in, the peak within the objective's elevation window).
 import { solveFeed, solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { offCentreShape, unpackOffCentre, type OffCentreSpec } from "../shapes/offCentre.js";
@@ -10,25 +12,26 @@ import { offCentreViolation } from "../shapes/offCentreConstraints.js";
 import { wavelengthM } from "../units.js";
 import { GEOMETRY_PENALTY, SWR_PENALTY, swrOf, type Evaluation } from "./objective.js";
 import { limitsOf, type DesignRequest } from "./request.js";
+import { groundedShape, objectiveSolveOptions } from "./groundObjective.js";
 
 export function offCentreSpecOf(r: DesignRequest): OffCentreSpec {
   return { piecesPerArm: r.piecesPerArm, wireLengthM: r.lengthWl * wavelengthM(r.frequencyHz) };
 }
 
 export function offCentreShapeOf(x: readonly number[], r: DesignRequest, frequencyHz = r.frequencyHz): Shape {
-  return offCentreShape(unpackOffCentre(x, r.piecesPerArm), offCentreSpecOf(r), {
+  return groundedShape(offCentreShape(unpackOffCentre(x, r.piecesPerArm), offCentreSpecOf(r), {
     frequencyHz,
     wireRadiusM: r.wireDiameterM / 2,
     conductor: r.conductor,
     segmentsPerWavelength: r.segmentsPerWavelength,
-  });
+  }), r); // over ground: mounted as the request says
 }
 
 export function evaluateOffCentre(x: readonly number[], r: DesignRequest, swrFrequenciesHz: number[], swrLimit: number): Evaluation {
   const violation = offCentreViolation(unpackOffCentre(x, r.piecesPerArm), offCentreSpecOf(r), limitsOf(r), wavelengthM(r.frequencyHz), r.wireDiameterM / 2);
   if (violation.total > 0) return { score: GEOMETRY_PENALTY + violation.total, gainDbi: null, maxSwr: null, reasons: violation.reasons };
   try {
-    const solution = solveShape(offCentreShapeOf(x, r));
+    const solution = solveShape(offCentreShapeOf(x, r), objectiveSolveOptions(r)); // over ground: peak in the objective's window
     const gainDbi = solution.peakGainDbi;
     if (r.variant === "max-gain") return { score: -gainDbi, gainDbi, maxSwr: null, reasons: [] };
     let maxSwr = 0;
