@@ -1,10 +1,11 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|pipeline]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
 import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchConverged } from "./converged.js";
 import { benchOptimizer } from "./optimizer.js";
+import { benchPipeline } from "./pipeline.js";
 import { benchSolver } from "./solver.js";
 
 const args = process.argv.slice(2);
@@ -73,6 +74,12 @@ if (wants("catalog")) {
     console.log(`  1.5λ K = 3 in 3 bands: reference + polish ${c.referencePlusPolishS.toFixed(1)} s, full search per band ${c.searchPerBandS.toFixed(1)} s; polish gives up at most ${c.polishGainShortfallDb.toFixed(3)} dB`);
     if (c.fullGridFromScratchS !== null) console.log(`  default grid from scratch, 2 workers: ${(c.fullGridFromScratchS / 60).toFixed(1)} min`);
   }
+}
+
+if (only === "pipeline") { // about 4 CPU min, so only when asked
+  const p = benchPipeline();
+  out.pipeline = p;
+  if (!json) for (const [k, s] of Object.entries(p)) console.log(`pipeline (2 bands × 1.5, 2 λ × K ≤ 3, both variants): ${k.padEnd(22)} ${s.toFixed(1)} CPU s`);
 }
 
 if (json) console.log(JSON.stringify(out));
