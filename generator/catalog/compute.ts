@@ -134,7 +134,8 @@ export function computeEntry(grid: Grid, cell: CellRequest, reference: Reference
       ? analyzeDesign(shapeFor(d.outcome, request, d.family), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
       : null;
     return { ...d, analysis };
-  }, (r) => r.analysis?.feed?.toleranceSwr.meetsLimitAsBuilt === true);
+    // no design at the limit itself: a stricter margin cannot find one, so the ladder stops there too
+  }, (r) => r.analysis === null || r.analysis.feed?.toleranceSwr.meetsLimitAsBuilt === true);
   return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance, family });
 }
 
