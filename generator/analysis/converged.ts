@@ -64,14 +64,19 @@ export interface Refinement {
 
 export const withinTolerance = (c: MeshChange): boolean => Math.abs(c.gainDb) < GAIN_TOLERANCE_DB && c.impedanceFraction < IMPEDANCE_TOLERANCE;
 
-/** Highest doubling of `start` the cap allows (at least one doubling). */
-export function refinementCap(shape: Shape, start: number): number {
+/** Densest mesh the thin-wire limit (segments of 4 radii) and the bound on unknowns allow, per wavelength. */
+export function meshCeiling(shape: Shape): number {
   const radii = shape.wires.map((w) => w.radiusM ?? shape.wireRadiusM);
   const thinLimit = wavelengthM(shape.frequencyHz) / (4 * Math.max(...radii));
   // and the mesh stays within the bound on unknowns (bounds.ts), with room for the feed's finer segments
   const wireWl = shape.wires.reduce((sum, w) => sum + w.pointsM.slice(1).reduce((t, p, i) => t + Math.hypot(p[0] - w.pointsM[i][0], p[1] - w.pointsM[i][1], p[2] - w.pointsM[i][2]), 0), 0) / wavelengthM(shape.frequencyHz);
   const sizeLimit = (0.8 * SHAPE_BOUNDS.unknownsMax) / Math.max(wireWl, 1e-9);
-  const cap = Math.min(MAX_SEGMENTS_PER_WAVELENGTH, thinLimit, sizeLimit);
+  return Math.min(thinLimit, sizeLimit);
+}
+
+/** Highest doubling of `start` the cap allows (at least one doubling). */
+export function refinementCap(shape: Shape, start: number): number {
+  const cap = Math.min(MAX_SEGMENTS_PER_WAVELENGTH, meshCeiling(shape));
   let spw = 2 * start;
   while (2 * spw <= cap) spw *= 2;
   return spw;

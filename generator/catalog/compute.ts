@@ -22,7 +22,7 @@ import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
 import { GENERATOR_VERSION } from "./versions.js";
-import { computeOffCentreReference, designCentreFed, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
+import { computeOffCentreReference, designCentreFed, firstHoldingAsBuilt, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
   lengthWl: number;
@@ -126,27 +126,37 @@ export const DOOMED_POLISH_SWR_FACTOR = 2;
 
 export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
   const request = bandRequest(grid, cell);
+  const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
+  // direct feed: the limit itself first, a margin only when that design does not hold as built (computeOffCentre.ts)
+  const { outcome, startedFrom, family, analysis } = firstHoldingAsBuilt(request, (margin) => {
+    const d = designCell(grid, request, reference, margin);
+    const analysis = d.outcome.status === "ok"
+      ? analyzeDesign(shapeFor(d.outcome, request, d.family), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
+      : null;
+    return { ...d, analysis };
+    // no design at the limit itself: a stricter margin cannot find one, so the ladder stops there too
+  }, (r) => r.analysis === null || r.analysis.feed?.toleranceSwr.meetsLimitAsBuilt === true);
+  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance, family });
+}
+
+function designCell(grid: Grid, request: DesignRequest, reference: ReferenceResult, margin: number) {
   // polish the reference shape (or, when the reference met no constraint, its least-bad attempt,
   // unless that attempt is too far from the SWR limit for a local polish to reach it)
   const perBand = searchPerBand(request, reference.status); // direct feed: a polish alone loses (computeOffCentre.ts)
   const skipPolishAboveSwr = reference.status === "ok" ? undefined : DOOMED_POLISH_SWR_FACTOR * request.swrLimit;
-  let outcome = designCentreFed(request, reference.x, perBand, skipPolishAboveSwr);
+  let outcome = designCentreFed(request, reference.x, perBand, skipPolishAboveSwr, margin);
   let startedFrom: "reference" | "search" = perBand ? "search" : "reference";
   if (!perBand && outcome.status !== "ok" && reference.status === "ok") {
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
-    outcome = designCentreFed(request, reference.x, true);
+    outcome = designCentreFed(request, reference.x, true, undefined, margin);
     startedFrom = "search";
   }
   if (outcome.status !== "ok") {
     outcome = { ...outcome, message: infeasibleMessage(outcome, request, reference.status !== "ok", grid.reference.relativeBandwidth) };
   }
   let family: Family;
-  ({ outcome, family } = tryOffCentre(request, outcome, reference.offCentre));
-  const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
-  const analysis = outcome.status === "ok"
-    ? analyzeDesign(shapeFor(outcome, request, family), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
-    : null;
-  return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance, family });
+  ({ outcome, family } = tryOffCentre(request, outcome, reference.offCentre, margin));
+  return { outcome, startedFrom, family };
 }
 
 // analysed as published (rounded), so the entry reproduces from its own shape file
