@@ -1,4 +1,4 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|designer]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
@@ -73,6 +73,14 @@ if (wants("catalog")) {
     console.log(`  1.5λ K = 3 in 3 bands: reference + polish ${c.referencePlusPolishS.toFixed(1)} s, full search per band ${c.searchPerBandS.toFixed(1)} s; polish gives up at most ${c.polishGainShortfallDb.toFixed(3)} dB`);
     if (c.fullGridFromScratchS !== null) console.log(`  default grid from scratch, 2 workers: ${(c.fullGridFromScratchS / 60).toFixed(1)} min`);
   }
+}
+
+// only when asked: it builds the site (if no matching build is cached) and needs Debian's chromium
+if (only === "designer") {
+  const { benchDesigner, printDesigner } = await import("./designer.js");
+  const d = await benchDesigner();
+  out.designer = d;
+  if (!json) printDesigner(d);
 }
 
 if (json) console.log(JSON.stringify(out));
