@@ -15,5 +15,7 @@ export default defineConfig({
   vite: {
     // Scripts and fonts stay separate files (no inline scripts: the CSP allows none).
     build: { assetsInlineLimit: 0 },
+    // the designer's worker is a module worker: code split, so what it never runs (pdf-lib) it never loads
+    worker: { format: "es" },
   },
 });

@@ -1,4 +1,4 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|pipeline]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|pipeline|designer]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
@@ -80,6 +80,14 @@ if (only === "pipeline") { // about 4 CPU min, so only when asked
   const p = benchPipeline();
   out.pipeline = p;
   if (!json) for (const [k, s] of Object.entries(p)) console.log(`pipeline (2 bands × 1.5, 2 λ × K ≤ 3, both variants): ${k.padEnd(22)} ${s.toFixed(1)} CPU s`);
+}
+
+// only when asked: it builds the site (if no matching build is cached) and needs Debian's chromium
+if (only === "designer") {
+  const { benchDesigner, printDesigner } = await import("./designer.js");
+  const d = await benchDesigner();
+  out.designer = d;
+  if (!json) printDesigner(d);
 }
 
 if (json) console.log(JSON.stringify(out));

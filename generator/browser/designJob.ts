@@ -2,8 +2,9 @@
 // command line and the catalog use: designBentArm (search + polish), designResult (the fields of
 // `design --json`), analyzeDesign (sweep, feed match, tolerance, pattern), buildEntry (an entry like
 // a catalog one), the catalog's renderers and download writers. No DOM, no Node: the caller passes
-// `post`, which the worker wires to postMessage.
-import { analyzeDesign, DEFAULT_TOLERANCE } from "../analysis/index.js";
+// `post`, which the worker wires to postMessage. The result is posted ("designed") as soon as the
+// search ends; the full analysis (64 bent copies for gain and SWR, feed options) follows in "done".
+import { analyzeDesign, DEFAULT_TOLERANCE, type SolveCache } from "../analysis/index.js";
 import { buildEntry } from "../catalog/entryBuild.js";
 import type { CellRequest, Grid } from "../catalog/grid.js";
 import { canonicalJson, roundSignificant, sha256 } from "../catalog/hash.js";
@@ -25,6 +26,8 @@ import { wavelengthM } from "../units.js";
 export type JobMessage =
   | { type: "progress"; evaluations: number; budget: number; bestGainDbi: number | null; pointsM: number[][] | null }
   | { type: "analysing"; evaluations: number }
+  /** The search's result as `design --json` gives it, sent before the slower analysis so the page can show it at once. */
+  | { type: "designed"; result: DesignResult }
   | { type: "done"; result: DesignResult; entry: Entry; figures: Figures | null; tables: Tables | null; files: DownloadFile[]; rows: DownloadRow[] }
   | { type: "error"; message: string; input: boolean };
 
@@ -84,11 +87,15 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
     },
   });
   post({ type: "analysing", evaluations: outcome.evaluations });
-  const result = designResult(request, outcome);
+  // one solve cache for the result's mesh ladder and the analysis's (same shape, same keys): the
+  // design-frequency solves are made once
+  const cache: SolveCache = new Map();
+  const result = designResult(request, outcome, outcome.message, cache);
+  post({ type: "designed", result });
   const band = bandOf(request);
   const tolerance = { samples: DEFAULT_TOLERANCE.samples, bendSigmaDeg: DEFAULT_TOLERANCE.bendSigmaDeg, lengthSigmaFraction: DEFAULT_TOLERANCE.lengthSigmaFraction, seed: request.seed };
   const analysis = outcome.status === "ok"
-    ? analyzeDesign(shapeOf(outcome.x, request), { bandHz: band, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
+    ? analyzeDesign(shapeOf(outcome.x, request), { bandHz: band, lineImpedanceOhm: request.lineImpedanceOhm, tolerance }, cache)
     : null;
   const entry = buildEntry({
     grid: {} as Grid, // buildEntry reads nothing from the grid; a custom design has none

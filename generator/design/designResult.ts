@@ -2,7 +2,7 @@
 // outcome, the winning shape solved once more with the energy balance, its parameters in builder's
 // units, and the optimizer's record. One function, so both front ends give the same fields.
 import { solutionSummary } from "../analysis/solutionSummary.js";
-import { convergedSolution } from "../analysis/converged.js";
+import { convergedSolution, type SolveCache } from "../analysis/converged.js";
 import { pieceLengthsM, unpack } from "../shapes/bentArm.js";
 import { DEG_PER_RAD, SPEED_OF_LIGHT_M_PER_S } from "../units.js";
 import type { DesignOutcome } from "./designBentArm.js";
@@ -41,10 +41,11 @@ export function overGroundReport(request: DesignRequest, outcome: DesignOutcome,
   };
 }
 
-export function designResult(request: DesignRequest, outcome: DesignOutcome, message = outcome.message) {
+/** `cache` may be passed on to analyzeDesign of the same shape, which then reuses these solves. */
+export function designResult(request: DesignRequest, outcome: DesignOutcome, message = outcome.message, cache: SolveCache = new Map()) {
   const shape = designShape(outcome.x, request);
   // the figures converged as `analyze` reports them (the search itself runs on the starting mesh)
-  const { solution, refinement } = convergedSolution(shape);
+  const { solution, refinement } = convergedSolution(shape, {}, cache);
   const summary = solutionSummary(solution, refinement);
   return {
     status: outcome.status,

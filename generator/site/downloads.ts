@@ -4,7 +4,6 @@
 // printable PDF), and a checksum list over all of them.
 import { serialize } from "../catalog/hash.js";
 import { bendingTemplateSvgs, nodesCsv, planBendingTemplate, sha256Listing, wireDxf, type ExportShape, type PaperName } from "../export/index.js";
-import { templatePdf } from "../export/pdfTemplate.js";
 import { isOk, type Entry, type OkEntry } from "./ok.js";
 
 export type DownloadGroup = "entry" | "shape" | "nodes" | "dxf" | "pdf-a4" | "pdf-letter" | "template-a4" | "template-letter" | "checksums";
@@ -119,6 +118,8 @@ export function templateSheets(entry: Entry): DownloadFile[] {
 
 /** One PDF per paper holding every sheet of that paper's template, made from the same SVG sheets. */
 async function pdfFiles(entry: OkEntry, sheets: readonly DownloadFile[], cache: PdfCache): Promise<DownloadFile[]> {
+  // loaded only when PDFs are wanted: pdf-lib stays out of the designer's worker bundle
+  const { templatePdf } = await import("../export/pdfTemplate.js");
   const out: DownloadFile[] = [];
   for (const { paper, label } of PAPERS) {
     const svgs = sheets.filter((f) => f.sheet?.paper === paper);

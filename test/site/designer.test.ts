@@ -58,6 +58,11 @@ afterAll(async () => {
 });
 
 const url = (q: Record<string, string>) => `${server.origin}${BASE}custom/?${new URLSearchParams(q)}`;
+/** The page publishes #design-result when the search ends and the full analysis after: this waits for both. */
+async function finished(p: PageWatch["page"]): Promise<void> {
+  await p.waitForSelector("#design-result", { state: "attached", timeout: 240_000 });
+  await p.waitForSelector('[data-progress][data-state="done"]', { state: "attached", timeout: 240_000 });
+}
 
 function expectLocal(w: PageWatch) {
   expect(w.requests.filter((u) => !u.startsWith(`${server.origin}${BASE}`) && !u.startsWith("data:") && !u.startsWith("blob:")), "requests leaving the host").toEqual([]);
@@ -77,6 +82,16 @@ describe("designer page", () => {
     await page.page.goto(url({ ...CASE, run: "1" }));
     await page.page.waitForSelector("#design-result", { state: "attached", timeout: 240_000 });
     web = JSON.parse((await page.page.locator("#design-result").textContent())!);
+    // shown before the analysis ends: the search's figures come first, the full sections after
+    // (read in one task of the page, so the DOM cannot change between the two reads)
+    const early = await page.page.evaluate(() => ({
+      state: document.querySelector<HTMLElement>("[data-progress]")!.dataset.state,
+      pieces: document.querySelectorAll('table[data-table="early-pieces"] tbody tr').length,
+    }));
+    expect(["analysing", "done"]).toContain(early.state);
+    if (early.state === "analysing") expect(early.pieces).toBe(1);
+    await finished(page.page);
+    expect(web).toEqual(JSON.parse((await page.page.locator("#design-result").textContent())!)); // published once
     expect(Object.keys(web).sort()).toEqual(Object.keys(cliResult).sort());
     expect(web.status).toBe("ok");
     expect(web.status).toBe(cliResult.status);
@@ -124,7 +139,7 @@ describe("designer page", () => {
         if (from !== page.page) await from.close();
         from = (await watchedPage(browser)).page;
         await from.goto(url({ ...CASE, run: "1" }));
-        await from.waitForSelector("#design-result", { state: "attached", timeout: 240_000 });
+        await finished(from);
       }
       const [dl] = await Promise.all([from.waitForEvent("download", { timeout: 30_000 }), from.click(`a[download="${name}"]`)]).catch((err) => {
         throw new Error(`download of ${name} (${k + 1} of ${links.length}): ${(err as Error).message.split("\n")[0]}`);

@@ -1,9 +1,10 @@
 // The designer page's controller: URL ↔ form, validation with the generator's own rules (before any
-// worker starts), the worker's life (start, progress, cancel), and handing the result to render.ts.
+// worker starts), the worker's life (start, progress, cancel), and handing the result to render.ts:
+// the search's result as soon as it ends (published in #design-result), the full analysis after.
 // User text only ever reaches the page through textContent, attribute values and URL encoding.
 import { fieldOfMessage, queryOf, requestFromState, stateFromQuery, wantsRun, type FormState, type QueryKey } from "../../../generator/browser/designerQuery";
 import type { JobMessage } from "../../../generator/browser/designJob";
-import { renderResult, publishResult, clearResult } from "./render";
+import { renderDesigned, renderResult, publishResult, clearResult } from "./render";
 
 interface CatalogBand { id: string; lowMhz: number; highMhz: number; designMhz: number; wireDiameterMm: number; conductor: string }
 
@@ -17,6 +18,7 @@ const progressText = progress.querySelector<HTMLElement>("[data-progress-text]")
 const progressBar = progress.querySelector<HTMLProgressElement>("[data-progress-bar]")!;
 const live = progress.querySelector<SVGPolylineElement>("[data-live-shape] polyline")!;
 const liveSvg = progress.querySelector<SVGSVGElement>("[data-live-shape]")!;
+const resultBox = document.querySelector<HTMLElement>("[data-result]")!;
 const bands = JSON.parse(form.dataset.bands ?? "[]") as CatalogBand[];
 const field = (name: string) => form.elements.namedItem(name) as HTMLInputElement | HTMLSelectElement;
 
@@ -93,12 +95,20 @@ function onMessage(m: JobMessage): void {
     progress.dataset.evaluations = String(m.evaluations);
     if (m.pointsM) drawLive(m.pointsM);
   } else if (m.type === "analysing") {
-    progressText.textContent = `${m.evaluations} evaluations; search done, computing the sweep, feed match and tolerance…`;
+    progressBar.value = progressBar.max;
+    progressText.textContent = `${m.evaluations} evaluations; search done, checking the mesh…`;
+  } else if (m.type === "designed") {
+    // the result as the CLI gives it, shown and published now; the analysis goes on in the worker
+    progress.dataset.state = "analysing";
+    progressBar.removeAttribute("value"); // indeterminate while the analysis runs
+    progressText.textContent = `Search done: ${m.result.evaluations} evaluations, ${m.result.status === "ok" ? `${m.result.peakGainDbi.toFixed(2)} dBi` : "no shape met every rule"}. Now the band sweep, feed options and bending tolerance (64 bent copies)…`;
+    renderDesigned(m.result, resultBox);
+    publishResult(m.result);
   } else if (m.type === "done") {
     stop("done");
+    progressBar.value = progressBar.max;
     progressText.textContent = `Done: ${m.result.evaluations} evaluations, ${m.result.status === "ok" ? `${m.result.peakGainDbi.toFixed(2)} dBi` : "no shape met every rule"}.`;
-    renderResult(m, document.querySelector<HTMLElement>("[data-result]")!);
-    publishResult(m.result);
+    renderResult(m, resultBox);
   } else {
     stop("error");
     progressText.textContent = "";
@@ -137,8 +147,11 @@ function start(): void {
 form.addEventListener("submit", (e) => { e.preventDefault(); start(); });
 form.addEventListener("input", () => updatePermalink(readForm()));
 cancelButton.addEventListener("click", () => {
+  const analysing = progress.dataset.state === "analysing";
   stop("cancelled");
-  progressText.textContent = `Cancelled after ${progress.dataset.evaluations ?? 0} evaluations.`;
+  progressText.textContent = analysing
+    ? "Analysis cancelled: the search's result stays below, without the sweep, feed options, tolerance and downloads."
+    : `Cancelled after ${progress.dataset.evaluations ?? 0} evaluations.`;
 });
 field("catalogBand").addEventListener("change", () => {
   const b = bands.find((x) => x.id === field("catalogBand").value);

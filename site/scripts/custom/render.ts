@@ -60,6 +60,27 @@ function downloads(m: Done): HTMLElement {
       h("td", { class: "num small muted" }, `${f.fixed(r.bytes / 1024, 1)} KiB`))))));
 }
 
+/** The search's result at once, while the worker runs the slower analysis: gain, impedance, the
+ * pieces and bends (the live drawing above shows the shape). renderResult replaces it. */
+export function renderDesigned(r: DesignResult, box: HTMLElement): void {
+  box.hidden = false;
+  const p = r.parameters;
+  box.replaceChildren(
+    h("h2", {}, "Your design"),
+    h("p", { class: "muted small" }, `${r.message}; ${r.evaluations} evaluations, seed ${r.seed}.`),
+    r.status === "ok" && h("ul", { class: "chips", "aria-label": "Summary" },
+      h("li", {}, "gain ", h("strong", {}, f.gainDbi(r.peakGainDbi))),
+      h("li", {}, `feed impedance ${f.impedance(r.inputImpedanceOhm)}`),
+      h("li", {}, `worst SWR in band ${f.swr(r.maxSwrInBand)} (search mesh)`),
+      h("li", {}, `first piece ${f.degrees(p.firstAngleDeg)} from the symmetry axis`)),
+    r.status === "ok" && h("div", { class: "table-wrap" }, h("table", { "data-table": "early-pieces" },
+      h("thead", {}, h("tr", {}, ...["Piece (from the feed)", "Length (mm)", "Length (in)", "Bend at its outer end"].map((c, k) => h("th", { scope: "col", class: k ? "num" : "" }, c)))),
+      h("tbody", {}, ...p.pieceLengthsM.map((len, k) => h("tr", {}, h("td", {}, String(k + 1)), h("td", { class: "num" }, f.millimetresNumber(len)), h("td", { class: "num" }, f.inchesNumber(len)),
+        h("td", { class: "num" }, k < p.bendAnglesDeg.length ? f.degrees(p.bendAnglesDeg[k]) : "tip")))))),
+    h("p", { class: "note", "data-analysing": "" }, "The drawings, band sweep, feed options, bending tolerance and downloads follow when the analysis ends (see the progress above)."),
+  );
+}
+
 export function renderResult(m: Done, box: HTMLElement): void {
   box.replaceChildren();
   box.hidden = false;
