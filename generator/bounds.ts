@@ -67,6 +67,8 @@ export const GRID_BOUNDS = {
   referenceRadiusWl: { min: 1e-6, max: 0.01 },
   relativeBandwidth: { min: 0, max: 0.5 },
   wireDiameterMm: { min: 2e-6, max: 2000 },
+  /** Over ground: support heights, minimum heights and the vertical clearance (m). */
+  heightM: { min: 0.5, max: 100 },
 } as const;
 
 /** "1e4 and 3e11" style text for messages ("must lie between …"). */

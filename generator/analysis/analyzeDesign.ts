@@ -5,6 +5,10 @@
 // settle at the design frequency and both band edges; the sweep, the pattern and the match use that
 // mesh. The tolerance Monte Carlo stays on the starting mesh (64 solves of the finest mesh would
 // cost too much) and compares its samples with that mesh's own nominal gain.
+// Over ground (shape.ground set) every gain is 4πU/P_in over the upper half-space and, with
+// `elevationWindowDeg`, the best within that window (the takeoff): the design figures, the sweep,
+// the mesh convergence and the tolerance copies alike; impedance and SWR are those at the height as
+// mounted. The pattern figures use the field over ground (groundFigures.ts).
 import { DEFAULT_SEGMENTS_PER_WAVELENGTH, findPeak, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
 import { DEG_PER_RAD } from "../units.js";
@@ -18,6 +22,7 @@ import { refineMesh, solveAt, uncertaintyOf, type SolveCache, type Uncertainty }
 import { bandSweep, sweepFrequencies, type Sweep } from "./sweep.js";
 import { DEFAULT_TOLERANCE, toleranceStudy, type ToleranceOptions, type ToleranceStudy } from "./tolerance.js";
 import { trustFigures, type TrustFigures } from "./trust.js";
+import { groundFieldOf, groundFrontToBackDb } from "./groundFigures.js";
 
 export const CUT_STEP_DEG = 2;
 export const GRID_THETA_STEP_DEG = 5;
@@ -31,6 +36,8 @@ export interface AnalysisOptions {
   swrLimit?: number;
   /** Fix this one mesh (no refinement), for comparisons. */
   segmentsPerWavelength?: number;
+  /** Over ground: the elevation window (degrees) the gain is judged in; default the whole upper half-space. */
+  elevationWindowDeg?: [number, number];
 }
 
 export interface PatternFigures {
@@ -90,14 +97,16 @@ export function bandCheckFrequencies(bandHz: [number, number]): number[] {
 /** `cache` may be shared with a caller that solves the same shape (the CLI's summary). */
 export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: SolveCache = new Map()): Analysis {
   checkAnalysisOptions(shape.frequencyHz, options);
-  const refinement = refineMesh(shape, { fixedSegmentsPerWavelength: options.segmentsPerWavelength, checkFrequenciesHz: bandCheckFrequencies(options.bandHz) }, cache);
+  const w = shape.ground ? options.elevationWindowDeg : undefined;
+  const refinement = refineMesh(shape, { fixedSegmentsPerWavelength: options.segmentsPerWavelength, checkFrequenciesHz: bandCheckFrequencies(options.bandHz), elevationWindowDeg: w }, cache);
   const { segmentsPerWavelength, feedGapM } = refinement;
-  const s = solveAt(shape, shape.frequencyHz, segmentsPerWavelength, feedGapM, cache);
+  const s = solveAt(shape, shape.frequencyHz, segmentsPerWavelength, feedGapM, cache, w);
   const baseSpw = options.segmentsPerWavelength ?? shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
-  const base = solveAt(shape, shape.frequencyHz, baseSpw, feedGapM, cache);
+  const base = solveAt(shape, shape.frequencyHz, baseSpw, feedGapM, cache, w);
+  const field = shape.ground ? groundFieldOf(shape, s) : s.farField;
   const { theta, phi } = s.peakDirectionRad;
   const cuts = principalCuts(theta, phi);
-  const polarization = polarizationAt(s.farField, theta, phi);
+  const polarization = polarizationAt(field, theta, phi);
   // a refined mesh: sweep on the coarser mesh of the last doubling, corrected to the finest (sweep.ts)
   const refined = options.segmentsPerWavelength === undefined;
   const sweep = bandSweep(shape, options.bandHz, options.lineImpedanceOhm, refined
@@ -105,13 +114,15 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: Sol
       segmentsPerWavelength: refinement.comparedWithSegmentsPerWavelength,
       feedGapM,
       cache,
+      elevationWindowDeg: w,
       correction: { fineSegmentsPerWavelength: segmentsPerWavelength, frequenciesHz: [...new Set([shape.frequencyHz, ...bandCheckFrequencies(options.bandHz)])] },
     }
-    : { segmentsPerWavelength, feedGapM, cache });
+    : { segmentsPerWavelength, feedGapM, cache, elevationWindowDeg: w });
   // the bent copies run on the starting mesh, against that mesh's own nominal (their spread is what counts)
   const baseShape = { ...shape, segmentsPerWavelength: baseSpw };
-  const toleranceOptions = { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm };
-  const tolerance = toleranceStudy(baseShape, base.peakGainDbi, toleranceOptions, findPeak(base.farField).maxima); // warm-started peaks
+  const toleranceOptions = { ...DEFAULT_TOLERANCE, ...options.tolerance, lineImpedanceOhm: options.lineImpedanceOhm, ...(w ? { elevationWindowDeg: w } : {}) };
+  // warm-started peaks in free space; over ground each copy searches its window afresh
+  const tolerance = toleranceStudy(baseShape, base.peakGainDbi, toleranceOptions, shape.ground ? undefined : findPeak(base.farField).maxima);
   return {
     design: {
       frequencyHz: shape.frequencyHz,
@@ -128,14 +139,14 @@ export function analyzeDesign(shape: Shape, options: AnalysisOptions, cache: Sol
     match: suggestMatch(sweep, shape.frequencyHz, s.inputImpedanceOhm),
     tolerance,
     pattern: {
-      beamwidthAlongThetaDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongTheta),
-      beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(s.farField, cuts.alongPhi),
-      frontToBackDb: frontToBackDb(s.farField, theta, phi),
+      beamwidthAlongThetaDeg: halfPowerBeamwidthDeg(field, cuts.alongTheta),
+      beamwidthAlongPhiDeg: halfPowerBeamwidthDeg(field, cuts.alongPhi),
+      frontToBackDb: "direct" in field ? groundFrontToBackDb(field, theta, phi) : frontToBackDb(field, theta, phi),
       polarization,
       words: describeLobe(shape.wires[shape.feed.wire].pointsM, shape.feed.vertex, theta, phi, polarization.tiltDeg),
-      cutAlongThetaDbi: cutGainsDbi(s.farField, cuts.alongTheta, s.inputPowerW, CUT_STEP_DEG),
-      cutAlongPhiDbi: cutGainsDbi(s.farField, cuts.alongPhi, s.inputPowerW, CUT_STEP_DEG),
-      gridDbi: gainGridDbi(s.farField, s.inputPowerW, GRID_THETA_STEP_DEG, GRID_PHI_STEP_DEG),
+      cutAlongThetaDbi: cutGainsDbi(field, cuts.alongTheta, s.inputPowerW, CUT_STEP_DEG),
+      cutAlongPhiDbi: cutGainsDbi(field, cuts.alongPhi, s.inputPowerW, CUT_STEP_DEG),
+      gridDbi: gainGridDbi(field, s.inputPowerW, GRID_THETA_STEP_DEG, GRID_PHI_STEP_DEG),
     },
     checks: trustFigures(refinement, s),
     warnings: s.warnings,

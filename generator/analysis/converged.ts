@@ -19,14 +19,17 @@ export const MAX_SEGMENTS_PER_WAVELENGTH = 200;
 
 export type SolveCache = Map<string, Solution>;
 
-/** The mesh is that of the design frequency: segments per wavelength scale as f0/f off it. */
-export function solveAt(shape: Shape, frequencyHz: number, spwAtDesign: number, feedGapM: number, cache: SolveCache): Solution {
-  const key = `${frequencyHz}|${spwAtDesign}|${feedGapM}`;
+/**
+ * The mesh is that of the design frequency: segments per wavelength scale as f0/f off it. Over
+ * ground, `elevationWindowDeg` makes the solution's peak the best direction within that window.
+ */
+export function solveAt(shape: Shape, frequencyHz: number, spwAtDesign: number, feedGapM: number, cache: SolveCache, elevationWindowDeg?: [number, number]): Solution {
+  const key = `${frequencyHz}|${spwAtDesign}|${feedGapM}${elevationWindowDeg ? `|${elevationWindowDeg.join(":")}` : ""}`;
   let s = cache.get(key);
   if (!s) {
     s = solveShape(
       { ...shape, frequencyHz },
-      { segmentsPerWavelength: (spwAtDesign * shape.frequencyHz) / frequencyHz, feedGapM, energyBalance: frequencyHz === shape.frequencyHz },
+      { segmentsPerWavelength: (spwAtDesign * shape.frequencyHz) / frequencyHz, feedGapM, energyBalance: frequencyHz === shape.frequencyHz, ...(elevationWindowDeg ? { elevationWindowDeg } : {}) },
     );
     cache.set(key, s);
   }
@@ -88,16 +91,19 @@ export interface RefineOptions {
   feedGapM?: number;
   /** Frequencies checked besides the design frequency (band edges). */
   checkFrequenciesHz?: number[];
+  /** Over ground: converge the gain within this elevation window (degrees). */
+  elevationWindowDeg?: [number, number];
 }
 
 /** Runs the doubling ladder; every solve lands in `cache` for the caller to reuse. */
 export function refineMesh(shape: Shape, options: RefineOptions, cache: SolveCache): Refinement {
   const feedGapM = options.feedGapM ?? defaultFeedGapM(shape.frequencyHz);
   const before = cache.size;
+  const w = options.elevationWindowDeg;
   const freqs = [shape.frequencyHz, ...(options.checkFrequenciesHz ?? []).filter((f) => f !== shape.frequencyHz)];
   if (options.fixedSegmentsPerWavelength !== undefined) {
     const spw = options.fixedSegmentsPerWavelength;
-    const change = meshChange(solveAt(shape, shape.frequencyHz, spw, feedGapM, cache), solveAt(shape, shape.frequencyHz, 2 * spw, feedGapM, cache));
+    const change = meshChange(solveAt(shape, shape.frequencyHz, spw, feedGapM, cache, w), solveAt(shape, shape.frequencyHz, 2 * spw, feedGapM, cache, w));
     return { segmentsPerWavelength: spw, comparedWithSegmentsPerWavelength: 2 * spw, feedGapM, change, converged: withinTolerance(change), solves: cache.size - before };
   }
   const start = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
@@ -108,7 +114,7 @@ export function refineMesh(shape: Shape, options: RefineOptions, cache: SolveCac
     const fine = 2 * coarse;
     change = { gainDb: 0, impedanceFraction: 0, impedanceOhm: 0 };
     for (const f of freqs) {
-      const c = meshChange(solveAt(shape, f, coarse, feedGapM, cache), solveAt(shape, f, fine, feedGapM, cache));
+      const c = meshChange(solveAt(shape, f, coarse, feedGapM, cache, w), solveAt(shape, f, fine, feedGapM, cache, w));
       if (Math.abs(c.gainDb) > Math.abs(change.gainDb)) change.gainDb = c.gainDb;
       if (c.impedanceFraction > change.impedanceFraction) change = { ...change, impedanceFraction: c.impedanceFraction, impedanceOhm: c.impedanceOhm };
     }
@@ -122,7 +128,7 @@ export function refineMesh(shape: Shape, options: RefineOptions, cache: SolveCac
 /** The published solution at the design frequency and how it was reached (for `analyze` alone). */
 export function convergedSolution(shape: Shape, options: RefineOptions = {}, cache: SolveCache = new Map()): { solution: Solution; refinement: Refinement } {
   const refinement = refineMesh(shape, options, cache);
-  return { solution: solveAt(shape, shape.frequencyHz, refinement.segmentsPerWavelength, refinement.feedGapM, cache), refinement };
+  return { solution: solveAt(shape, shape.frequencyHz, refinement.segmentsPerWavelength, refinement.feedGapM, cache, options.elevationWindowDeg), refinement };
 }
 
 /** The stated uncertainty of published figures: the last change, as magnitudes. */

@@ -7,8 +7,15 @@
 // - polarization at the peak from Eθ, Eφ (Balanis, Antenna Theory, 3rd ed., §2.12.2, with the
 //   Stokes parameters): tilt τ = ½ atan2(S2, S1) from θ̂ toward φ̂, axial ratio
 //   AR = (|E|² + √(S1²+S2²)) / (|E|² − √(S1²+S2²)), square-rooted to a field ratio.
-import { farFieldAt, intensityAt, type FarFieldPlan } from "../em/farField.js";
+import { farFieldAt as freeFieldAt, intensityAt as freeIntensityAt, type FarFieldPlan } from "../em/farField.js";
+import { groundFieldAt, groundIntensityAt, type GroundFarField } from "../em/groundFarField.js";
 import { DEG_PER_RAD, RAD_PER_DEG, toDb } from "../units.js";
+
+/** A free-space far field, or one over ground (direct + reflected; zero below the horizon). */
+export type PatternField = FarFieldPlan | GroundFarField;
+const isGround = (f: PatternField): f is GroundFarField => "direct" in f;
+const farFieldAt = (f: PatternField, t: number, p: number, out: Float64Array): void => (isGround(f) ? groundFieldAt(f, t, p, out) : freeFieldAt(f, t, p, out));
+const intensityAt = (f: PatternField, t: number, p: number, out: Float64Array): number => (isGround(f) ? groundIntensityAt(f, t, p, out) : freeIntensityAt(f, t, p, out));
 
 type V3 = [number, number, number];
 
@@ -31,14 +38,14 @@ export function principalCuts(thetaRad: number, phiRad: number): { alongTheta: C
   return { alongTheta: { d, t: thetaHat(thetaRad, phiRad) }, alongPhi: { d, t: phiHat(phiRad) } };
 }
 
-export function intensityOnCut(plan: FarFieldPlan, cut: Cut, alphaRad: number, scratch = new Float64Array(4)): number {
+export function intensityOnCut(plan: PatternField, cut: Cut, alphaRad: number, scratch = new Float64Array(4)): number {
   const c = Math.cos(alphaRad), s = Math.sin(alphaRad);
   const [theta, phi] = toAngles([cut.d[0] * c + cut.t[0] * s, cut.d[1] * c + cut.t[1] * s, cut.d[2] * c + cut.t[2] * s]);
   return intensityAt(plan, theta, phi, scratch);
 }
 
 /** Half-power beamwidth in degrees along a cut, or null when U never halves within ±180°. */
-export function halfPowerBeamwidthDeg(plan: FarFieldPlan, cut: Cut): number | null {
+export function halfPowerBeamwidthDeg(plan: PatternField, cut: Cut): number | null {
   const scratch = new Float64Array(4);
   const half = intensityOnCut(plan, cut, 0, scratch) / 2;
   const edge = (sign: 1 | -1): number | null => {
@@ -61,7 +68,7 @@ export function halfPowerBeamwidthDeg(plan: FarFieldPlan, cut: Cut): number | nu
   return plus === null || minus === null ? null : (plus + minus) * DEG_PER_RAD;
 }
 
-export function frontToBackDb(plan: FarFieldPlan, thetaRad: number, phiRad: number): number {
+export function frontToBackDb(plan: PatternField, thetaRad: number, phiRad: number): number {
   const scratch = new Float64Array(4);
   const front = intensityAt(plan, thetaRad, phiRad, scratch);
   const d = direction(thetaRad, phiRad);
@@ -77,7 +84,7 @@ export interface Polarization {
   sense: "linear" | "right-hand" | "left-hand";
 }
 
-export function polarizationAt(plan: FarFieldPlan, thetaRad: number, phiRad: number): Polarization {
+export function polarizationAt(plan: PatternField, thetaRad: number, phiRad: number): Polarization {
   const e = new Float64Array(4);
   farFieldAt(plan, thetaRad, phiRad, e);
   const [tr, ti, pr, pi] = e;
@@ -96,7 +103,7 @@ export function polarizationAt(plan: FarFieldPlan, thetaRad: number, phiRad: num
 }
 
 /** Gain in dBi along a cut every stepDeg over a full turn (α from −180° to 180° − step). */
-export function cutGainsDbi(plan: FarFieldPlan, cut: Cut, inputPowerW: number, stepDeg: number): number[] {
+export function cutGainsDbi(plan: PatternField, cut: Cut, inputPowerW: number, stepDeg: number): number[] {
   const scratch = new Float64Array(4);
   const n = Math.round(360 / stepDeg);
   return Array.from({ length: n }, (_, i) => {
@@ -106,7 +113,7 @@ export function cutGainsDbi(plan: FarFieldPlan, cut: Cut, inputPowerW: number, s
 }
 
 /** Gain in dBi on a θ–φ grid: rows θ = 0…180° by thetaStepDeg, columns φ = 0…360° − step. */
-export function gainGridDbi(plan: FarFieldPlan, inputPowerW: number, thetaStepDeg: number, phiStepDeg: number): number[][] {
+export function gainGridDbi(plan: PatternField, inputPowerW: number, thetaStepDeg: number, phiStepDeg: number): number[][] {
   const scratch = new Float64Array(4);
   const rows = Math.round(180 / thetaStepDeg) + 1;
   const cols = Math.round(360 / phiStepDeg);

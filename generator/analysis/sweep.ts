@@ -49,6 +49,8 @@ export interface SweepMesh {
   feedGapM: number;
   cache: SolveCache;
   correction?: { fineSegmentsPerWavelength: number; frequenciesHz: number[] };
+  /** Over ground: the gain is the best within this elevation window (degrees). */
+  elevationWindowDeg?: [number, number];
 }
 
 const inv = (z: { re: number; im: number }) => {
@@ -70,13 +72,13 @@ export function bandSweep(shape: Shape, bandHz: [number, number], lineImpedanceO
   };
   const c = m.correction;
   const deltas = c?.frequenciesHz.map((f) => {
-    const coarse = solveAt(shape, f, m.segmentsPerWavelength, m.feedGapM, m.cache);
-    const fine = solveAt(shape, f, c.fineSegmentsPerWavelength, m.feedGapM, m.cache);
+    const coarse = solveAt(shape, f, m.segmentsPerWavelength, m.feedGapM, m.cache, m.elevationWindowDeg);
+    const fine = solveAt(shape, f, c.fineSegmentsPerWavelength, m.feedGapM, m.cache, m.elevationWindowDeg);
     const yf = inv(fine.inputImpedanceOhm), yc = inv(coarse.inputImpedanceOhm);
     return { re: yf.re - yc.re, im: yf.im - yc.im, gain: fine.peakGainDbi - coarse.peakGainDbi };
   });
   const points = sweepFrequencies(bandHz).map(({ frequencyHz, inBand }): SweepPoint => {
-    const s = solveAt(shape, frequencyHz, m.segmentsPerWavelength, m.feedGapM, m.cache);
+    const s = solveAt(shape, frequencyHz, m.segmentsPerWavelength, m.feedGapM, m.cache, m.elevationWindowDeg);
     let z = s.inputImpedanceOhm, gainDbi = s.peakGainDbi;
     if (c && deltas) {
       const w = lagrangeWeights(c.frequenciesHz, frequencyHz);
@@ -85,7 +87,7 @@ export function bandSweep(shape: Shape, bandHz: [number, number], lineImpedanceO
       gainDbi += deltas.reduce((a, d, i) => a + w[i] * d.gain, 0);
       const exact = c.frequenciesHz.indexOf(frequencyHz); // a checked frequency: the fine solve itself
       if (exact >= 0) {
-        const fine = solveAt(shape, frequencyHz, c.fineSegmentsPerWavelength, m.feedGapM, m.cache);
+        const fine = solveAt(shape, frequencyHz, c.fineSegmentsPerWavelength, m.feedGapM, m.cache, m.elevationWindowDeg);
         z = fine.inputImpedanceOhm;
         gainDbi = fine.peakGainDbi;
       }

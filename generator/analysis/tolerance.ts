@@ -21,6 +21,8 @@ export interface ToleranceOptions {
   lengthSigmaFraction: number;
   seed: number;
   lineImpedanceOhm: number;
+  /** Over ground: each copy's gain is the best within this elevation window (degrees). */
+  elevationWindowDeg?: [number, number];
 }
 
 export const DEFAULT_TOLERANCE: ToleranceOptions = { samples: 64, bendSigmaDeg: 2, lengthSigmaFraction: 0.005, seed: 1, lineImpedanceOhm: 50 };
@@ -102,7 +104,8 @@ export function toleranceStudy(shape: Shape, nominalGainDbi: number, options: To
   for (let i = 0; i < options.samples; i++) {
     const copy = perturbShape(shape, rng, options);
     try {
-      const s = solveShape(copy, peakStarts?.length ? { peak: { ...DEFAULT_PEAK_OPTIONS, starts: peakStarts } } : {});
+      const window = options.elevationWindowDeg ? { elevationWindowDeg: options.elevationWindowDeg, energyBalance: false } : {};
+      const s = solveShape(copy, { ...window, ...(peakStarts?.length ? { peak: { ...DEFAULT_PEAK_OPTIONS, starts: peakStarts } } : {}) });
       gains.push(s.peakGainDbi);
       swrs.push(swr(s.inputImpedanceOhm, options.lineImpedanceOhm));
     } catch (err) {

@@ -27,6 +27,8 @@ export interface EntryParts {
   tolerance: { samples: number; bendSigmaDeg: number; lengthSigmaFraction: number };
   /** Which shape family `outcome.x` belongs to (default centre-fed). */
   family?: Family;
+  /** Over-ground cells (computeGround.ts): the inputs block and the figures (null when infeasible). */
+  overGround?: { inputs: NonNullable<Entry["inputs"]["overGround"]>; figures: Entry["overGround"] };
 }
 
 /**
@@ -53,9 +55,12 @@ export function sweepHonestMessage(message: string, request: DesignRequest, anal
 
 const variantWords = { "max-gain": "most gain", "direct-feed": "direct 50 Ω feed" } as const;
 
-export function entryTitle(cell: CellRequest): string {
+export function entryTitle(cell: CellRequest, over?: { heightM: number; mounting: string; purpose: string }): string {
   const pieces = cell.piecesPerArm === 1 ? "1 piece" : `${cell.piecesPerArm} pieces`;
-  return `${cell.band.name}: ${cell.lengthWl} λ wire, ${pieces} per arm, ${variantWords[cell.variant]}`;
+  const base = `${cell.band.name}: ${cell.lengthWl} λ wire, ${pieces} per arm, ${variantWords[cell.variant]}`;
+  if (!over) return base;
+  const support = over.mounting === "vertical" ? `vertical from a ${over.heightM} m mast` : `horizontal at ${over.heightM} m`;
+  return `${base}, ${support}, ${over.purpose}`;
 }
 
 export function buildEntry(p: EntryParts): Entry {
@@ -66,7 +71,7 @@ export function buildEntry(p: EntryParts): Entry {
   const body: Omit<Entry, "contentHash"> = {
     schemaVersion: ENTRY_SCHEMA_VERSION,
     id: cell.id,
-    title: entryTitle(cell),
+    title: entryTitle(cell, p.overGround?.inputs),
     status: ok ? "ok" : "infeasible",
     message: ok ? sweepHonestMessage(outcome.message, request, a) : outcome.message,
     inputs: {
@@ -87,6 +92,7 @@ export function buildEntry(p: EntryParts): Entry {
       seed: request.seed,
       segmentsPerWavelength: request.segmentsPerWavelength ?? 25,
       tolerance: { samples: p.tolerance.samples, bendSigmaDeg: p.tolerance.bendSigmaDeg, lengthSigmaFraction: p.tolerance.lengthSigmaFraction },
+      ...(p.overGround ? { overGround: p.overGround.inputs } : {}),
     },
     versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
     inputHash: p.inputHash,
@@ -122,6 +128,7 @@ export function buildEntry(p: EntryParts): Entry {
     } : null,
     checks: ok ? { ...a.checks, warnings: a.warnings } : null,
     feed: ok && a.feed ? a.feed : null,
+    ...(p.overGround ? { overGround: ok ? p.overGround.figures : null } : {}),
     optimizer: {
       evaluations: outcome.evaluations,
       searchEvaluations: outcome.searchEvaluations,

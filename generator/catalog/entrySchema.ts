@@ -120,7 +120,8 @@ export function makeEntrySchema(z: Z) {
     segmentsPerWavelength: z.tuple([num, num]),
     gainChangeDb: num,
     impedanceChangeOhm: num,
-    energyBalanceError: num,
+    /** Null over real ground (issue 13), where the ground absorbs power and no balance is checked. */
+    energyBalanceError: num.nullable(),
     warnings: z.array(z.string()),
   }).strict();
   const optimizer = z.object({

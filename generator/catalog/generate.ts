@@ -7,9 +7,10 @@ import { cpus } from "node:os";
 import { join } from "node:path";
 import { Piscina } from "piscina";
 import { InputError } from "../errors.js";
-import { entryInputHash, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
+import { previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
 import type { Entry } from "./entrySchema.js";
-import { expandGrid, shardOf, type CellRequest, type Grid } from "./grid.js";
+import { shardOf, type CellRequest, type Grid } from "./grid.js";
+import { allCells, cellInputHash, type AnyCell } from "./cells.js";
 import { readEntry, readReference, referenceDir, writeEntry, writeReference } from "./store.js";
 import { createScheduler } from "./scheduler.js";
 import { lockFolder } from "./lock.js";
@@ -44,18 +45,18 @@ export function onlyMatcher(pattern: string): (id: string) => boolean {
   return (id) => re.test(id);
 }
 
-export async function selectWork(o: GenerateOptions): Promise<{ cells: CellRequest[]; todo: CellRequest[]; recomputed: string[] }> {
-  let cells = expandGrid(o.grid);
+export async function selectWork(o: GenerateOptions): Promise<{ cells: AnyCell[]; todo: AnyCell[]; recomputed: string[] }> {
+  let cells = allCells(o.grid);
   if (o.only) {
     const matches = onlyMatcher(o.only);
     cells = cells.filter((c) => matches(c.id));
   }
   if (o.shard) cells = shardOf(cells, o.shard);
-  const todo: CellRequest[] = [];
+  const todo: AnyCell[] = [];
   const recomputed: string[] = [];
   for (const cell of cells) {
     const found = await readEntry(o.outDir, cell.id);
-    if (found && found.ok && found.value.inputHash === entryInputHash(o.grid, cell)) continue;
+    if (found && found.ok && found.value.inputHash === cellInputHash(o.grid, cell)) continue;
     if (found) recomputed.push(found.ok ? `${cell.id}: inputs changed` : found.problem);
     todo.push(cell);
   }
@@ -94,7 +95,7 @@ async function generateLocked(o: GenerateOptions): Promise<GenerateReport> {
   const { cells, todo, recomputed } = await selectWork(o);
   // every reference the missing entries need, and the chain of shorter ones each starts from
   const keys = new Map<string, ReferenceKey>();
-  for (const c of todo) {
+  for (const c of todo.flatMap((t) => (t.kind === "free" ? [t.cell] : []))) {
     for (let k: ReferenceKey | null = keyOf(c); k; k = previousKey(k)) keys.set(referenceId(k), k);
   }
   const stored = new Map<string, ReferenceResult>();
@@ -130,9 +131,12 @@ async function generateLocked(o: GenerateOptions): Promise<GenerateReport> {
       }
       return refs.get(id)!;
     };
-    await Promise.all(todo.map(async (cell) => {
-      const reference = await referenceOf(keyOf(cell));
-      const entry = await scheduler.run<Entry>({ kind: "entry", grid: o.grid, cell, reference } satisfies Task, 1);
+    await Promise.all(todo.map(async (c) => {
+      const cell = c.cell;
+      const task: Task = c.kind === "free"
+        ? { kind: "entry", grid: o.grid, cell: c.cell, reference: await referenceOf(keyOf(c.cell)) }
+        : { kind: "ground", grid: o.grid, cell: c.cell };
+      const entry = await scheduler.run<Entry>(task, 1);
       await writeEntry(o.outDir, entry);
       if (entry.status !== "ok") infeasible++;
       tick(cell.id);

@@ -9,22 +9,8 @@ import { InputError } from "../errors.js";
 import { checkTextLimits } from "../textLimits.js";
 import { wavelengthM } from "../units.js";
 import { VARIANTS, type Variant } from "../design/request.js";
-
-const MHZ = { min: S.frequencyHz.min / 1e6, max: S.frequencyHz.max / 1e6 };
-const mhz = (what: string) => boundedNumber(what, MHZ, " MHz");
-const whole = (what: string, r: { min: number; max: number }) => boundedNumber(what, r).refine(Number.isInteger, `${what} must be a whole number`);
-const text = (what: string) => z.string({ error: `${what} must be a string` });
-
-const bandSchema = z.strictObject({
-  id: text("id").regex(/^[a-z0-9][a-z0-9.]*$/, "id must be lower-case letters, digits and dots").max(40, "id must be at most 40 characters"),
-  name: text("name").min(1, "name must not be empty").max(200, "name must be at most 200 characters"),
-  lowMhz: mhz("lowMhz"),
-  highMhz: mhz("highMhz"),
-  designMhz: mhz("designMhz"),
-  wireDiameterMm: boundedNumber("wireDiameterMm", G.wireDiameterMm, " mm"),
-  conductor: z.enum(["perfect", "copper", "aluminium"], { error: "conductor must be perfect, copper or aluminium" }),
-  note: text("note").max(2000, "note must be at most 2000 characters"),
-});
+import type { Mounting } from "../shapes/mounting.js";
+import { bandSchema, whole, overGroundIssues, overGroundSchema } from "./gridHf.js";
 
 export const gridSchema = z
   .strictObject({
@@ -47,26 +33,36 @@ export const gridSchema = z
     piecesPerArm: z.array(whole("pieces per arm", G.piecesPerArm), { error: "piecesPerArm must be a list of whole numbers" }).min(1, "piecesPerArm needs at least one value"),
     variants: z.array(z.enum(VARIANTS, { error: `variants must be ${VARIANTS.join(" or ")}` }), { error: "variants must be a list" }).min(1, "variants needs at least one"),
     bands: z.array(bandSchema, { error: "bands must be a list of bands" }).min(1, "bands needs at least one band").max(G.bandsMax, `bands holds at most ${G.bandsMax} bands`),
+    /** HF bands over ground (gridHf.ts); absent: the free-space grid alone. */
+    overGround: overGroundSchema.optional(),
   })
   .superRefine((g, ctx) => {
+    if (g.overGround) for (const issue of overGroundIssues(g.overGround)) ctx.addIssue(issue);
+    [...g.bands, ...(g.overGround?.bands ?? [])].forEach((b, n) => {
+      const place = n < g.bands.length ? ["bands", n] : ["overGround", "bands", n - g.bands.length];
+      for (const issue of bandIssues(b)) ctx.addIssue({ ...issue, path: [...place, ...issue.path] });
+    });
     const seen = new Set<string>();
     g.bands.forEach((b, i) => {
       if (seen.has(b.id)) ctx.addIssue({ code: "custom", path: ["bands", i, "id"], message: `duplicate band id "${b.id}"` });
       seen.add(b.id);
-      if (!(b.lowMhz < b.highMhz)) {
-        ctx.addIssue({ code: "custom", path: ["bands", i, "lowMhz"], message: `lowMhz must be below highMhz (got ${b.lowMhz} ≥ ${b.highMhz})` });
-      } else if (b.highMhz > A.bandRatioMax * b.lowMhz) {
-        ctx.addIssue({ code: "custom", path: ["bands", i, "highMhz"], message: `highMhz may be at most ${A.bandRatioMax} × lowMhz (got ${b.lowMhz}–${b.highMhz})` });
-      } else if (b.designMhz < b.lowMhz || b.designMhz > b.highMhz) {
-        ctx.addIssue({ code: "custom", path: ["bands", i, "designMhz"], message: `designMhz must lie inside the band ${b.lowMhz}–${b.highMhz} (got ${b.designMhz})` });
-      } else if (b.wireDiameterMm / 2000 > S.radiusMaxWl * wavelengthM(b.designMhz * 1e6)) {
-        ctx.addIssue({ code: "custom", path: ["bands", i, "wireDiameterMm"], message: `wireDiameterMm must be at most ${2 * S.radiusMaxWl} wavelengths (${Number((2000 * S.radiusMaxWl * wavelengthM(b.designMhz * 1e6)).toPrecision(3))} mm at ${b.designMhz} MHz)` });
-      }
     });
     for (const [key, list] of [["lengthsWl", g.lengthsWl], ["piecesPerArm", g.piecesPerArm], ["variants", g.variants]] as const) {
       if (new Set(list as readonly unknown[]).size !== list.length) ctx.addIssue({ code: "custom", path: [key], message: `${key} repeats a value` });
     }
   });
+
+/** The rules across one band's fields, paths relative to the band. */
+function bandIssues(b: z.output<typeof bandSchema>): { code: "custom"; path: string[]; message: string }[] {
+  const issue = (key: string, message: string) => [{ code: "custom" as const, path: [key], message }];
+  if (!(b.lowMhz < b.highMhz)) return issue("lowMhz", `lowMhz must be below highMhz (got ${b.lowMhz} ≥ ${b.highMhz})`);
+  if (b.highMhz > A.bandRatioMax * b.lowMhz) return issue("highMhz", `highMhz may be at most ${A.bandRatioMax} × lowMhz (got ${b.lowMhz}–${b.highMhz})`);
+  if (b.designMhz < b.lowMhz || b.designMhz > b.highMhz) return issue("designMhz", `designMhz must lie inside the band ${b.lowMhz}–${b.highMhz} (got ${b.designMhz})`);
+  if (b.wireDiameterMm / 2000 > S.radiusMaxWl * wavelengthM(b.designMhz * 1e6)) {
+    return issue("wireDiameterMm", `wireDiameterMm must be at most ${2 * S.radiusMaxWl} wavelengths (${Number((2000 * S.radiusMaxWl * wavelengthM(b.designMhz * 1e6)).toPrecision(3))} mm at ${b.designMhz} MHz)`);
+  }
+  return [];
+}
 
 export type Grid = z.output<typeof gridSchema>;
 export type Band = Grid["bands"][number];

@@ -2,8 +2,10 @@
 // hash its grid cell expects; every grid cell must have its entry; every reference search the grid
 // needs must be present, intact and current; no temporary file of a stopped run may remain; a seeded
 // sample is recomputed and must come out byte for byte the same. Each kind of problem is counted.
-import { computeEntry, computeReference, entryInputHash, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
-import { expandGrid, type Grid } from "./grid.js";
+import { computeEntry, computeReference, previousKey, referenceHash, referenceId, type ReferenceKey, type ReferenceResult } from "./compute.js";
+import type { Grid } from "./grid.js";
+import { allCells, cellInputHash } from "./cells.js";
+import { computeGroundEntry } from "./computeGround.js";
 import { createRng } from "../optimize/rng.js";
 import { checkEntryText, checkReferenceText, entryFile, listJson, listJsonOf, readReference, referenceDir, serialize } from "./store.js";
 import { strayTempFiles } from "../fsAtomic.js";
@@ -44,7 +46,7 @@ async function referenceFor(grid: Grid, dir: string, key: ReferenceKey): Promise
 
 export async function verifyCatalog(grid: Grid, dir: string, sample: number, seed = 1): Promise<VerifyReport> {
   const names = await listJsonOf(dir, "verify"); // a missing folder or a file is an InputError
-  const cells = new Map(expandGrid(grid).map((c) => [c.id, c]));
+  const cells = new Map(allCells(grid).map((c) => [c.id, c]));
   const problems: string[] = [];
   const counts = Object.fromEntries(PROBLEM_KINDS.map((k) => [k, 0])) as Record<ProblemKind, number>;
   const report = (kind: ProblemKind, line: string) => { counts[kind]++; problems.push(line); };
@@ -56,7 +58,7 @@ export async function verifyCatalog(grid: Grid, dir: string, sample: number, see
     if (!c.ok) { report("damaged", c.problem); continue; }
     const cell = cells.get(id);
     if (!cell) { report("notInGrid", `${id}: not a cell of the grid`); continue; }
-    if (c.value.inputHash !== entryInputHash(grid, cell)) { report("stale", `${id}: input hash differs from the grid's (stale: run generate)`); continue; }
+    if (c.value.inputHash !== cellInputHash(grid, cell)) { report("stale", `${id}: input hash differs from the grid's (stale: run generate)`); continue; }
     good.push(id);
   }
   const present = new Set(names.map((n) => n.replace(/\.json$/, "")));
@@ -66,7 +68,7 @@ export async function verifyCatalog(grid: Grid, dir: string, sample: number, see
   // every reference search the grid's cells start from, and the chain of shorter ones
   const refDir = referenceDir(dir);
   const needed = new Map<string, ReferenceKey>();
-  for (const c of cells.values()) {
+  for (const { cell: c } of [...cells.values()].filter((x) => x.kind === "free")) { // over-ground cells search without one
     for (let k: ReferenceKey | null = { lengthWl: c.lengthWl, piecesPerArm: c.piecesPerArm, variant: c.variant }; k; k = previousKey(k)) needed.set(referenceId(k), k);
   }
   const refNames = await listJson(refDir);
@@ -92,10 +94,14 @@ export async function verifyCatalog(grid: Grid, dir: string, sample: number, see
     picked.push(pool[i]);
   }
   for (const id of picked) {
-    const cell = cells.get(id)!;
-    const key = { lengthWl: cell.lengthWl, piecesPerArm: cell.piecesPerArm, variant: cell.variant };
-    const reference = await referenceFor(grid, dir, key);
-    const again = serialize(computeEntry(grid, cell, reference));
+    const c = cells.get(id)!;
+    let again: string;
+    if (c.kind === "ground") again = serialize(computeGroundEntry(grid, c.cell));
+    else {
+      const cell = c.cell;
+      const reference = await referenceFor(grid, dir, { lengthWl: cell.lengthWl, piecesPerArm: cell.piecesPerArm, variant: cell.variant });
+      again = serialize(computeEntry(grid, cell, reference));
+    }
     const stored = await readFile(entryFile(dir, id), "utf8");
     if (again !== stored) report("differs", `${id}: recomputing it gives different bytes`);
   }

@@ -21,6 +21,8 @@ export interface AnalyzeOptions {
   seed: number;
   ground?: Ground;
   heightM?: number;
+  /** Over ground: the elevation window the gain is judged in (degrees). */
+  elevationWindowDeg?: [number, number];
   /** Flags typed on the command line (not defaults): those that need --band-mhz are refused without it. */
   given?: string[];
 }
@@ -72,8 +74,8 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
     if (stray.length) throw new InputError(`analyze: ${stray.join(", ")} ${stray.length > 1 ? "apply" : "applies"} only with --band-mhz LO:HI (the band sweep, feed match and tolerance study)`);
   }
   const loaded = applyGroundFlags(await loadShape(path), options, path);
-  if (loaded.ground && options.bandMhz) {
-    throw new InputError("analyze: --band-mhz is not available over ground yet (its sweep, match and pattern figures are free-space ones); run without it");
+  if (options.elevationWindowDeg && !(loaded.ground && options.bandMhz)) {
+    throw new InputError("analyze: --elevation-window-deg applies only over ground (--ground or the shape file's \"ground\") with --band-mhz LO:HI");
   }
   const shape = loaded;
   // converged by default (analysis/converged.ts); --segments-per-wavelength fixes one mesh
@@ -84,6 +86,7 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
     lineImpedanceOhm: options.lineOhm,
     tolerance: { ...DEFAULT_TOLERANCE, samples: options.toleranceSamples, seed: options.seed },
     segmentsPerWavelength: fixedSpw,
+    elevationWindowDeg: options.elevationWindowDeg,
   };
   if (analysisOptions) {
     checkAnalysisOptions(shape.frequencyHz, analysisOptions);
@@ -96,7 +99,7 @@ export async function analyzeCommand(path: string, options: AnalyzeOptions): Pro
   }
   const cache = new Map();
   const checkFrequenciesHz = options.bandMhz ? bandCheckFrequencies(options.bandMhz) : [];
-  const { solution, refinement } = convergedSolution(shape, { fixedSegmentsPerWavelength: fixedSpw, checkFrequenciesHz }, cache);
+  const { solution, refinement } = convergedSolution(shape, { fixedSegmentsPerWavelength: fixedSpw, checkFrequenciesHz, elevationWindowDeg: analysisOptions ? options.elevationWindowDeg : undefined }, cache);
   const summary = solutionSummary(solution, refinement);
   checkFinite(path, summary);
   const analysis = analysisOptions ? analyzeDesign(shape, analysisOptions, cache) : null;

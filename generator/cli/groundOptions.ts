@@ -31,6 +31,16 @@ export function heightM(flag: string) {
   };
 }
 
+export function elevationWindow(flag: string) {
+  return (text: string): [number, number] => {
+    const parts = text.split(":").map((t) => (t.trim() === "" ? NaN : Number(t)));
+    if (parts.length !== 2 || !parts.every((v) => Number.isFinite(v) && v >= 0 && v <= 90) || !(parts[0] < parts[1])) {
+      throw new InvalidArgumentError(`${flag} must be LO:HI in degrees of elevation, 0 ≤ LO < HI ≤ 90`);
+    }
+    return [parts[0], parts[1]];
+  };
+}
+
 /** The shape with the flags' ground and height applied, validated again over the ground. */
 export function applyGroundFlags(shape: Shape, flags: { ground?: Ground; heightM?: number }, label: string): Shape {
   const ground = flags.ground ?? shape.ground;

@@ -5,6 +5,7 @@ import { analyzeCommand } from "./analyzeCommand.js";
 import { printable, runReportingErrors } from "./errors.js";
 import { DEFAULT_ENTRIES, DEFAULT_GRID, generateCommand, mergeCommand, verifyCommand } from "./catalogCommands.js";
 import { designCommand } from "./designCommand.js";
+import { elevationWindow } from "./groundOptions.js";
 import { bandMhz, nonEmpty, numberIn, oneOf, positiveNumber, wholeNumber } from "./options.js";
 import { ANALYSIS_BOUNDS as A, SHAPE_BOUNDS as S } from "../bounds.js";
 import { shapeCommand } from "./shapeCommand.js";
@@ -30,6 +31,7 @@ program
   .option("--seed <S>", "seed of the tolerance study (with --band-mhz)", wholeNumber("--seed", A.seed.min, A.seed.max), 1)
   .option("--ground <name>", GROUND_FLAG_HELP, groundName("--ground"))
   .option("--height-m <H>", "lift the shape so its lowest point is H metres above the ground", heightM("--height-m"))
+  .option("--elevation-window-deg <LO:HI>", "over ground, with --band-mhz: judge gain within this elevation window, e.g. 5:25 (long-distance) or 60:90 (near-vertical)", elevationWindow("--elevation-window-deg"))
   .action((shape: string, opts, cmd: Command) => analyzeCommand(shape, { ...opts, given: ["lineOhm", "toleranceSamples", "seed"].filter((k) => cmd.getOptionValueSource(k) === "cli") }));
 
 program

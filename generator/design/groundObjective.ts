@@ -5,7 +5,7 @@
 // The windows are common practice for HF planning. Gain is 4πU/P_in, so ground loss counts.
 import type { Shape } from "../em/index.js";
 import type { SolveOptions } from "../em/solve.js";
-import { mountShape } from "../shapes/mounting.js";
+import { mountShape, mountVerticalAtMastTop } from "../shapes/mounting.js";
 import type { DesignRequest } from "./request.js";
 
 export const ELEVATION_OBJECTIVES = ["peak", "long-distance", "near-vertical"] as const;
@@ -17,9 +17,16 @@ export const ELEVATION_WINDOWS_DEG: Record<ElevationObjective, [number, number]>
   "near-vertical": [60, 90],
 };
 
-/** The free-space bent-arm shape placed over the request's ground (unchanged in free space). */
+/**
+ * The free-space bent-arm shape placed over the request's ground (unchanged in free space). With
+ * `verticalClearanceM` a vertical request's height is the mast top (the feed); a shape whose arms
+ * come lower than the clearance throws InputError, which the objective scores as infeasible.
+ */
 export function groundedShape(shape: Shape, r: DesignRequest): Shape {
   if (!r.ground || r.heightM === undefined) return shape;
+  if (r.mounting === "vertical" && r.verticalClearanceM !== undefined) {
+    return { ...mountVerticalAtMastTop(shape, r.heightM, r.verticalClearanceM), ground: r.ground };
+  }
   return { ...mountShape(shape, r.mounting ?? "horizontal", r.heightM), ground: r.ground };
 }
 
@@ -30,5 +37,6 @@ export function groundedShape(shape: Shape, r: DesignRequest): Shape {
 export function objectiveSolveOptions(r: DesignRequest): SolveOptions {
   if (!r.ground) return {};
   const objective = r.objective ?? "peak";
-  return { energyBalance: false, ...(objective !== "peak" ? { elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective] } : {}) };
+  const window = r.elevationWindowDeg ?? (objective !== "peak" ? ELEVATION_WINDOWS_DEG[objective] : undefined);
+  return { energyBalance: false, ...(window ? { elevationWindowDeg: window } : {}) };
 }

@@ -32,12 +32,22 @@ export const designRequestSchema = z
     ground: groundSchema.optional(),
     heightM: positive("heightM").optional(),
     mounting: z.enum(MOUNTINGS, { error: `mounting must be one of ${MOUNTINGS.join(", ")}` }).optional(), // default horizontal
+    /** Vertical only: heightM is the mast top (the feed) and every point stays this far above the ground. */
+    verticalClearanceM: positive("verticalClearanceM").optional(),
+    /** Over ground: the objective's elevation window in degrees, instead of its default (groundObjective.ts). */
+    elevationWindowDeg: z.tuple([z.number(), z.number()]).refine(([lo, hi]) => lo >= 0 && lo < hi && hi <= 90, "elevationWindowDeg must satisfy 0 ≤ low < high ≤ 90").optional(),
     objective: z.enum(ELEVATION_OBJECTIVES, { error: `objective must be one of ${ELEVATION_OBJECTIVES.join(", ")}` }).optional(), // default peak
   })
   .superRefine((r, ctx) => {
     if (r.ground && r.heightM === undefined) ctx.addIssue({ code: "custom", path: ["heightM"], message: "a design over ground needs a height (--height-m)" });
     if (!r.ground && (r.heightM !== undefined || (r.objective ?? "peak") !== "peak" || (r.mounting ?? "horizontal") !== "horizontal")) {
       ctx.addIssue({ code: "custom", path: ["ground"], message: "a height, a mounting or an elevation objective needs a ground (--ground)" });
+    }
+    if (r.verticalClearanceM !== undefined && r.mounting !== "vertical") {
+      ctx.addIssue({ code: "custom", path: ["verticalClearanceM"], message: "a clearance applies to the vertical mounting only" });
+    }
+    if (r.verticalClearanceM !== undefined && r.heightM !== undefined && r.verticalClearanceM >= r.heightM) {
+      ctx.addIssue({ code: "custom", path: ["verticalClearanceM"], message: `the clearance must be below the mast height ${r.heightM} m` });
     }
     if (r.heightM !== undefined && r.heightM < 5 * r.wireDiameterM) {
       ctx.addIssue({ code: "custom", path: ["heightM"], message: `height must be at least 5 wire diameters (${5 * r.wireDiameterM} m)` });

@@ -5,7 +5,10 @@
 //               running down from it to tie-down points:        (x, y, 0) → (x, 0, z_feed − y),
 //               z_feed = H + max y, so the lowest point is exactly at the stated minimum height H.
 // The mast height of the vertical mounting (z_feed) follows from the shape and is reported with it.
+// The catalog's vertical cells give the support instead (mountVerticalAtMastTop): the feed at the top
+// of a mast of height H, (x, y, 0) → (x, 0, H − y), and every point at least a stated clearance up.
 import type { Shape, Vec3 } from "../em/index.js";
+import { InputError } from "../errors.js";
 
 export const MOUNTINGS = ["horizontal", "vertical"] as const;
 export type Mounting = (typeof MOUNTINGS)[number];
@@ -20,5 +23,18 @@ export function feedHeightM(shape: Shape, mounting: Mounting, heightM: number): 
 export function mountShape(shape: Shape, mounting: Mounting, heightM: number): Shape {
   const top = feedHeightM(shape, mounting, heightM);
   const place = ([x, y, z]: Vec3): Vec3 => (mounting === "horizontal" ? [x, y, z + heightM] : [x, z, top - y]);
+  return { ...shape, wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map(place) })) };
+}
+
+/**
+ * Vertical mounting with the feed at the top of a mast H metres high; throws InputError (an
+ * infeasible shape to the optimizer) when a point comes lower than `clearanceM` above the ground.
+ */
+export function mountVerticalAtMastTop(shape: Shape, mastHeightM: number, clearanceM: number): Shape {
+  const lowest = mastHeightM - Math.max(...shape.wires.flatMap((w) => w.pointsM.map((p) => p[1])));
+  if (lowest < clearanceM) {
+    throw new InputError(`vertical mounting: the arms come down to ${lowest.toFixed(2)} m, below the ${clearanceM} m clearance under a ${mastHeightM} m mast`);
+  }
+  const place = ([x, y, z]: Vec3): Vec3 => [x, z, mastHeightM - y];
   return { ...shape, wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map(place) })) };
 }

@@ -248,6 +248,6 @@ export function checkRows(e: OkEntry): Row[] {
     ...(gap !== undefined ? [{ label: "Feed gap assumed", parts: [shown(`${f.fixed(gap * 1000, 1)} mm`, "figures.feedGapM", "mm"), plain(" between the terminals (λ/50), the source voltage spread evenly over it")] }] : []),
     { label: "Gain change on refinement", parts: [shown(`${f.fixed(c.gainChangeDb, 3)} dB`, "checks.gainChangeDb")] },
     { label: "Impedance change on refinement", parts: [shown(f.ohms(c.impedanceChangeOhm), "checks.impedanceChangeOhm")] },
-    { label: "Energy balance error", parts: [plain(c.energyBalanceError.toExponential(1))] },
+    { label: "Energy balance error", parts: [plain(c.energyBalanceError === null ? "not checked (real ground absorbs power)" : c.energyBalanceError.toExponential(1))] },
   ];
 }

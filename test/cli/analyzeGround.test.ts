@@ -50,7 +50,8 @@ describe("bentwire analyze over ground", () => {
     [["--height-m", "3"], /--height-m needs a ground/],
     [["--ground", "perfect"], /give --height-m/],
     [["--ground", "perfect", "--height-m", "-1"], /--height-m must be/],
-    [["--ground", "good", "--height-m", "2", "--band-mhz", "144:146"], /not available over ground/],
+    [["--ground", "good", "--height-m", "2", "--elevation-window-deg", "5:25"], /--elevation-window-deg applies only over ground .* with --band-mhz/],
+    [["--ground", "good", "--height-m", "2", "--band-mhz", "144:146", "--elevation-window-deg", "30:10"], /--elevation-window-deg must be LO:HI/],
   ] as [string[], RegExp][]) {
     it(`refuses ${args.join(" ")} in one line, exit 2`, () => {
       const run = cli("analyze", example, ...args);

@@ -1,0 +1,153 @@
+// Computes an over-ground catalog entry (issue 13). Over ground a shape does not scale with the
+// wavelength (the height in metres, the ground's permittivity per frequency), so every cell runs its
+// own search (designBentArm with the request's ground, support height, mounting and elevation
+// window), then the analysis over ground (analyzeDesign with the window: sweep, feed options at that
+// height, tolerance), and the over-ground block: the mounted points, takeoff, planning elevations,
+// elevation and azimuth cuts, ground loss, the height curve, the other grounds and the free-space
+// figure. Pure: same inputs, same bytes.
+import { analyzeDesign, type Analysis } from "../analysis/index.js";
+import { solveAt } from "../analysis/converged.js";
+import { groundCuts, groundFieldOf } from "../analysis/groundFigures.js";
+import { swr } from "../analysis/swr.js";
+import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
+import { shapeOf } from "../design/objective.js";
+import { parseDesignRequest, type DesignRequest } from "../design/request.js";
+import { groundByName } from "../em/ground.js";
+import { SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { buildEntry, publishedShapeOf } from "./entryBuild.js";
+import type { Entry } from "./entrySchema.js";
+import type { Grid } from "./grid.js";
+import { heightCurveHeightsM, type GroundCellRequest, type OverGroundGrid } from "./gridHf.js";
+import { canonicalJson, sha256 } from "./hash.js";
+import { GENERATOR_VERSION } from "./versions.js";
+
+export function groundRequest(grid: Grid, cell: GroundCellRequest, over: { heightM?: number; groundName?: string } = {}): DesignRequest {
+  const o = grid.overGround!;
+  return parseDesignRequest({
+    frequencyHz: cell.band.designMhz * 1e6,
+    lengthWl: cell.lengthWl,
+    piecesPerArm: cell.piecesPerArm,
+    wireDiameterM: cell.band.wireDiameterMm / 1000,
+    conductor: cell.band.conductor,
+    variant: cell.variant,
+    bandHz: [cell.band.lowMhz * 1e6, cell.band.highMhz * 1e6],
+    lineImpedanceOhm: grid.lineImpedanceOhm,
+    swrLimit: grid.swrLimit,
+    seed: grid.seed,
+    segmentsPerWavelength: grid.segmentsPerWavelength,
+    ground: groundByName(over.groundName ?? cell.groundName, "overGround.ground"),
+    heightM: over.heightM ?? cell.heightM,
+    mounting: cell.mounting,
+    elevationWindowDeg: cell.elevationWindowDeg,
+    ...(cell.mounting === "vertical" ? { verticalClearanceM: o.verticalClearanceM } : {}),
+  }, cell.id);
+}
+
+export function groundEntryInputHash(grid: Grid, cell: GroundCellRequest): string {
+  const o = grid.overGround!;
+  return sha256(canonicalJson({
+    request: groundRequest(grid, cell),
+    band: cell.band,
+    tolerance: grid.tolerance,
+    heightCurveM: heightCurveHeightsM(o, cell),
+    otherGrounds: o.otherGrounds,
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
+  }));
+}
+
+type OverGroundBlock = NonNullable<Entry["overGround"]>;
+
+/** Window gain, takeoff, impedance and SWR of the same x re-mounted (another height or ground). */
+function remounted(x: number[], r: DesignRequest, spw: number, feedGapM: number): { shape: Shape; s: Solution } | null {
+  try {
+    const shape = publishedShapeOf(shapeOf(x, r));
+    return { shape, s: solveAt(shape, shape.frequencyHz, spw, feedGapM, new Map(), r.elevationWindowDeg) };
+  } catch {
+    return null; // a vertical shape that no longer clears the ground at a lower mast
+  }
+}
+
+const shortFigures = (s: Solution, lineOhm: number) => ({
+  gainDbi: s.peakGainDbi,
+  takeoffElevationDeg: 90 - (s.peakDirectionRad.theta * 180) / Math.PI,
+  impedanceOhm: s.inputImpedanceOhm,
+  swr: Number.isFinite(swr(s.inputImpedanceOhm, lineOhm)) ? swr(s.inputImpedanceOhm, lineOhm) : null,
+});
+
+export function overGroundBlock(grid: Grid, cell: GroundCellRequest, x: number[], request: DesignRequest, shape: Shape, a: Analysis): OverGroundBlock {
+  const o: OverGroundGrid = grid.overGround!;
+  const spw = a.design.uncertainty.segmentsPerWavelength;
+  const feedGapM = a.design.feedGapM;
+  const s = solveAt(shape, shape.frequencyHz, spw, feedGapM, new Map(), request.elevationWindowDeg);
+  const g = s.ground!;
+  const takeoff = { elevationDeg: g.peakElevationDeg, azimuthDeg: g.peakAzimuthDeg };
+  const cuts = groundCuts(groundFieldOf(shape, s), s.inputPowerW, takeoff);
+  const zs = shape.wires.flatMap((w) => w.pointsM.map((p) => p[2]));
+  const feedPoint = shape.wires[shape.feed.wire].pointsM[shape.feed.vertex];
+  const heightCurve = heightCurveHeightsM(o, cell).flatMap((heightM) => {
+    const m = remounted(x, { ...request, heightM }, spw, feedGapM);
+    return m ? [{ heightM, ...shortFigures(m.s, request.lineImpedanceOhm) }] : [];
+  });
+  const otherGrounds = o.otherGrounds.filter((n) => n !== cell.groundName).flatMap((groundName) => {
+    const m = remounted(x, { ...request, ground: groundByName(groundName, "overGround.otherGrounds") }, spw, feedGapM);
+    return m ? [{ groundName, ...shortFigures(m.s, request.lineImpedanceOhm) }] : [];
+  });
+  const free = publishedShapeOf(shapeOf(x, { ...request, ground: undefined, heightM: undefined, mounting: undefined, elevationWindowDeg: undefined, verticalClearanceM: undefined }));
+  const fs = solveAt(free, free.frequencyHz, spw, feedGapM, new Map());
+  return {
+    mountedPointsM: shape.wires[0].pointsM.map((p) => [p[0], p[1], p[2]] as [number, number, number]),
+    feedHeightM: feedPoint[2],
+    lowestPointM: Math.min(...zs),
+    highestPointM: Math.max(...zs),
+    peakGainDbi: cuts.peakGainDbi,
+    peakElevationDeg: cuts.peakElevationDeg,
+    peakAzimuthDeg: cuts.peakAzimuthDeg,
+    takeoffElevationDeg: takeoff.elevationDeg,
+    takeoffAzimuthDeg: takeoff.azimuthDeg,
+    gainAtElevationDbi: g.gainAtElevationDbi,
+    elevationCut: cuts.elevationCut,
+    azimuthCut: cuts.azimuthCut,
+    groundLossFraction: g.groundLossW === null || request.ground?.type === "perfect" ? null : g.groundLossW / s.inputPowerW,
+    heightCurve,
+    otherGrounds,
+    freeSpace: { gainDbi: fs.peakGainDbi, impedanceOhm: fs.inputImpedanceOhm },
+  };
+}
+
+const f1 = (v: number) => v.toFixed(1);
+
+/** The lobe and mounting sentences over ground (the free-space ones speak of turning the plane). */
+export function groundWords(cell: GroundCellRequest, g: OverGroundBlock): { lobe: string; mounting: string } {
+  const [lo, hi] = cell.elevationWindowDeg;
+  const lobe = `Within the ${cell.purpose} window (${lo}–${hi}° elevation) the strongest direction is ${f1(g.takeoffElevationDeg)}° up at azimuth ${f1(g.takeoffAzimuthDeg)}° (from +x toward +y); the strongest in the whole sky is ${f1(g.peakElevationDeg)}° up at ${f1(g.peakAzimuthDeg)}°, ${f1(g.peakGainDbi)} dBi.`;
+  const mounting = cell.mounting === "vertical"
+    ? `Feed at the top of a ${cell.heightM} m mast, the wire in a vertical plane sloping down to tie-offs; its lowest point is ${f1(g.lowestPointM)} m above the ground.`
+    : `Wire plane level at ${cell.heightM} m: masts or trees at the feed and at each bend and tip hold it at that height.`;
+  return { lobe, mounting };
+}
+
+export function computeGroundEntry(grid: Grid, cell: GroundCellRequest): Entry {
+  const request = groundRequest(grid, cell);
+  const outcome: DesignOutcome = designBentArm(request);
+  const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
+  let analysis: Analysis | null = null;
+  let overGround: OverGroundBlock | null = null;
+  if (outcome.status === "ok") {
+    const shape = publishedShapeOf(shapeOf(outcome.x, request));
+    analysis = analyzeDesign(shape, { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, swrLimit: request.swrLimit, tolerance, elevationWindowDeg: request.elevationWindowDeg });
+    overGround = overGroundBlock(grid, cell, outcome.x, request, shape, analysis);
+    analysis = { ...analysis, pattern: { ...analysis.pattern, words: groundWords(cell, overGround) } };
+  }
+  const inputsOverGround = {
+    groundName: cell.groundName,
+    ground: request.ground!,
+    heightM: cell.heightM,
+    mounting: cell.mounting,
+    purpose: cell.purpose as "long-distance" | "near-vertical",
+    elevationWindowDeg: cell.elevationWindowDeg,
+  };
+  return buildEntry({
+    grid, cell, request, outcome, startedFrom: "search", analysis, inputHash: groundEntryInputHash(grid, cell), tolerance,
+    overGround: { inputs: inputsOverGround, figures: overGround },
+  });
+}
