@@ -49,8 +49,8 @@ describe("over-ground grid validation", () => {
     const c = expandOverGround(g.overGround).find((x) => x.id === "40m-0.5wl-k1-max-gain-h10m-horizontal-near-vertical")!;
     expect(heightCurveHeightsM(g.overGround!, c)).toEqual([7, 13, 15]);
   });
-  it("the default grid's over-ground part parses and keeps the free-space cells as they were", () => {
-    const g = parseGrid(readFileSync("designs/grid.yaml", "utf8"), "designs/grid.yaml");
+  it("the HF grid's over-ground part parses and keeps the free-space cells as they were", () => {
+    const g = parseGrid(readFileSync("designs/grid-hf.yaml", "utf8"), "designs/grid-hf.yaml");
     expect(allCells(g).filter((c) => c.kind === "free")).toHaveLength(g.bands.length * g.lengthsWl.length * g.piecesPerArm.length * g.variants.length);
   });
 });
