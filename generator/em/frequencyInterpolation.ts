@@ -52,7 +52,7 @@ export function bandImpedances(shape: Shape, frequenciesHz: readonly number[], o
     const spw = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
     return frequenciesHz.map((f) => solveFeed({ ...shape, frequencyHz: f }, { segmentsPerWavelength: (spw * shape.frequencyHz) / f, feedGapM: gapM }).inputImpedanceOhm);
   }
-  const mesh = buildMesh(shape, undefined, feedSegmentM(gapM, shape.wires[shape.feed.wire].radiusM ?? shape.wireRadiusM)); // as solveFeed meshes it
+  const mesh = buildMesh(shape, undefined, feedSegmentM(gapM, shape.wires[shape.feed.wire].radiusM ?? shape.wireRadiusM), true); // as solveFeed meshes it
   const sym = detectMirrorSymmetry(mesh);
   const n = mesh.unknowns;
   const lo = Math.min(...frequenciesHz), hi = Math.max(...frequenciesHz);

@@ -9,6 +9,10 @@
 //   ∫_0^L ds/√((s−s0)²+ρ²) = asinh((L−s0)/ρ) + asinh(s0/ρ),
 //   ∫_0^L s ds/√((s−s0)²+ρ²) = √((L−s0)²+ρ²) − √(s0²+ρ²) + s0·∫_0^L ds/√(…),
 // with the outer integral by Gauss–Legendre, taken as the mean of p-outer and q-outer.
+// Optionally (KernelRules.exactNear, off by default) collinear near pairs (a segment with itself and
+// its neighbours on one straight run) get the exact-kernel correction of exactKernel.ts added to the
+// static part: the ring-averaged surface kernel instead of the reduced one.
+import { addCollinearCorrection } from "./exactKernel.js";
 import { gaussLegendre01, type GaussRule } from "./gaussLegendre.js";
 import type { Mesh } from "./mesh.js";
 
@@ -16,12 +20,14 @@ export interface KernelRules {
   far: GaussRule[]; // indexed by number of points
   nearOuter: GaussRule;
   nearSmooth: GaussRule;
+  /** Exact (ring-averaged) static kernel on collinear near pairs; false (default): the reduced kernel throughout. Off by default: it moved impedances ~1 % on thick wires but did not cure the mesh creep (the wire ends did), and its graded quadrature is not yet mirror-exact (1e-7). */
+  exactNear: boolean;
 }
 
-export function createKernelRules(): KernelRules {
+export function createKernelRules(exactNear = false): KernelRules {
   const far: GaussRule[] = [];
   for (let n = 1; n <= 6; n++) far[n] = gaussLegendre01(n);
-  return { far, nearOuter: gaussLegendre01(10), nearSmooth: gaussLegendre01(4) };
+  return { far, nearOuter: gaussLegendre01(10), nearSmooth: gaussLegendre01(4), exactNear };
 }
 
 /** The rules every solve uses: a table of constants, computed once rather than per matrix fill. */
@@ -79,6 +85,7 @@ export function pairIntegrals(
       const j = i === 2 || i === 3 ? i + 2 : i === 4 || i === 5 ? i - 2 : i; // K10(q,p) = K01(p,q)
       out[i] = 0.5 * (out[i] + swapped[j]);
     }
+    if (rules.exactNear) collinearCorrection(mesh, p, q, Math.sqrt(a2), out);
     return;
   }
   // segments n apart on a straight piece sit at ratio n exactly: the small margin keeps such ties on
@@ -154,3 +161,21 @@ function nearPair(
   const scale = lp * lq;
   for (let i = 0; i < 8; i++) out[i] *= scale;
 }
+
+/** Adds the exact-kernel correction when q lies on p's axis (parallel or antiparallel). */
+function collinearCorrection(mesh: Mesh, p: number, q: number, radiusM: number, out: Float64Array): void {
+  const { start, dir, lengthM } = mesh;
+  const ex = dir[3 * p], ey = dir[3 * p + 1], ez = dir[3 * p + 2];
+  const fx = dir[3 * q], fy = dir[3 * q + 1], fz = dir[3 * q + 2];
+  const cross = Math.hypot(ey * fz - ez * fy, ez * fx - ex * fz, ex * fy - ey * fx);
+  if (cross > COLLINEAR_TOLERANCE) return;
+  const dx = start[3 * q] - start[3 * p], dy = start[3 * q + 1] - start[3 * p + 1], dz = start[3 * q + 2] - start[3 * p + 2];
+  const q0 = dx * ex + dy * ey + dz * ez;
+  const off = Math.hypot(dy * ez - dz * ey, dz * ex - dx * ez, dx * ey - dy * ex);
+  if (off > COLLINEAR_TOLERANCE * Math.max(lengthM[p], lengthM[q])) return;
+  const sense = ex * fx + ey * fy + ez * fz > 0 ? 1 : -1;
+  addCollinearCorrection(lengthM[p], q0, sense, lengthM[q], radiusM, out);
+}
+
+/** Direction and offset tolerance (relative) for treating two segments as on one axis. */
+const COLLINEAR_TOLERANCE = 1e-9;

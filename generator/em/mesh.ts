@@ -8,6 +8,13 @@
 // that touches the feed vertex is halved, repeatedly and towards the feed, until the segments at
 // the feed are no longer than `feedSegmentM` (lengths d/2, d/4, …, d/2^m, d/2^m; neighbours
 // differ by at most a factor 2), the same on both sides so mirror-symmetric shapes stay so.
+// With `gradeEnds` the end segments of every wire are halved the same way towards the wire's two
+// ends until they are no longer than END_SEGMENT_RADII wire radii (so never under half that, the
+// thin-wire limit of 4 radii): at an open end the current falls to zero with an unbounded charge
+// density, which a uniform mesh resolves only slowly, so the input impedance creeps as the mesh
+// doubles (measured: bench/convergenceLadder.ts); a mesh graded geometrically towards a singular
+// end is the standard remedy (graded meshes for edge singularities, e.g. Babuška & Guo, the h-p
+// finite element method — from memory). The ends then stay resolved the same at every doubling.
 // A basis function sits on every node of a wire except its two free ends and spans the segment
 // before and the segment after, so current is continuous through bends and zero at free ends
 // (Harrington 1968; Gibson, The Method of Moments in Electromagnetics, thin wires).
@@ -17,6 +24,8 @@ import type { Shape } from "./shapeFile.js";
 
 export const DEFAULT_SEGMENTS_PER_WAVELENGTH = 25;
 export const MIN_SEGMENTS_PER_PIECE = 3;
+/** End segments (with gradeEnds) are no longer than this many wire radii. */
+export const END_SEGMENT_RADII = 8;
 /** Relative slack before rounding a segment count up (see the header). */
 export const SEGMENT_COUNT_SLACK = 1e-3;
 
@@ -53,13 +62,13 @@ export function feedHalvings(segmentM: number, feedSegmentM: number): number {
 }
 
 /** Fractions of the piece at which segments end, from its start (last one is 1). */
-function pieceBreaks(n: number, halvings: number, feedAtStart: boolean, feedAtEnd: boolean): number[] {
-  // graded lengths in units of one uniform segment, from the feed outward: 2^-m, 2^-m, …, 1/2
-  const graded = halvings === 0 ? [1] : [2 ** -halvings, ...Array.from({ length: halvings }, (_, j) => 2 ** (j - halvings))];
+function pieceBreaks(n: number, startHalvings: number, endHalvings: number): number[] {
+  // graded lengths in units of one uniform segment, from the graded end outward: 2^-m, 2^-m, …, 1/2
+  const graded = (m: number) => (m === 0 ? [1] : [2 ** -m, ...Array.from({ length: m }, (_, j) => 2 ** (j - m))]);
   const units: number[] = [];
   for (let k = 0; k < n; k++) {
-    if (feedAtStart && k === 0) units.push(...graded);
-    else if (feedAtEnd && k === n - 1) units.push(...[...graded].reverse());
+    if (k === 0 && startHalvings > 0) units.push(...graded(startHalvings));
+    else if (k === n - 1 && endHalvings > 0) units.push(...graded(endHalvings).reverse());
     else units.push(1);
   }
   const breaks: number[] = [];
@@ -69,7 +78,7 @@ function pieceBreaks(n: number, halvings: number, feedAtStart: boolean, feedAtEn
   return breaks;
 }
 
-export function buildMesh(shape: Shape, segmentsPerWavelength?: number, feedSegmentM = Infinity): Mesh {
+export function buildMesh(shape: Shape, segmentsPerWavelength?: number, feedSegmentM = Infinity, gradeEnds = false): Mesh {
   const spw = segmentsPerWavelength ?? shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
   const lambdaM = wavelengthM(shape.frequencyHz);
   const lengths: number[][] = shape.wires.map((wire, w) =>
@@ -91,7 +100,15 @@ export function buildMesh(shape: Shape, segmentsPerWavelength?: number, feedSegm
   const halvings = Number.isFinite(feedSegmentM)
     ? Math.max(feedHalvings(lengths[fw][fv - 1] / counts[fw][fv - 1], feedSegmentM), feedHalvings(lengths[fw][fv] / counts[fw][fv], feedSegmentM))
     : 0;
-  const breaks = counts.map((row, w) => row.map((n, i) => pieceBreaks(n, w === fw ? halvings : 0, w === fw && i === fv, w === fw && i === fv - 1)));
+  const endHalvings = (w: number, i: number) =>
+    gradeEnds ? feedHalvings(lengths[w][i] / counts[w][i], END_SEGMENT_RADII * (shape.wires[w].radiusM ?? shape.wireRadiusM)) : 0;
+  const breaks = counts.map((row, w) =>
+    row.map((n, i) => {
+      const atStart = w === fw && i === fv ? halvings : i === 0 ? endHalvings(w, i) : 0;
+      const atEnd = w === fw && i === fv - 1 ? halvings : i === row.length - 1 ? endHalvings(w, i) : 0;
+      return pieceBreaks(n, atStart, atEnd);
+    }),
+  );
   const segmentCount = breaks.flat().reduce((s, b) => s + b.length, 0);
   const mesh: Mesh = {
     segmentCount,

@@ -21,7 +21,7 @@ import { solutionOverGround, type GroundFigures } from "./groundSolve.js";
 import { DEFAULT_PEAK_OPTIONS, findPeak, integratePattern, patternPointsFor, type PeakOptions } from "./pattern.js";
 import type { Conductor, Shape } from "./shapeFile.js";
 
-export const SOLVER_VERSION = "bentwire-em-2";
+export const SOLVER_VERSION = "bentwire-em-3";
 
 export interface SolveOptions {
   segmentsPerWavelength?: number;
@@ -93,7 +93,7 @@ export function feedExcitation(shape: Shape, mesh: Mesh, gapM: number): Float64A
 export function solveFeed(shape: Shape, options: SolveOptions = {}): FeedSolution {
   const gapM = options.feedGapM ?? defaultFeedGapM(shape.frequencyHz);
   const feedRadiusM = shape.wires[shape.feed.wire].radiusM ?? shape.wireRadiusM;
-  const mesh = withGroundedEnds(buildMesh(shape, options.segmentsPerWavelength, feedSegmentM(gapM, feedRadiusM)), shape); // no-op in free space
+  const mesh = withGroundedEnds(buildMesh(shape, options.segmentsPerWavelength, feedSegmentM(gapM, feedRadiusM), true), shape); // ends graded (mesh.ts); withGroundedEnds: no-op in free space
   const warnings = checkMesh(mesh);
   const k = wavenumberRadPerM(shape.frequencyHz);
   const sym = options.symmetry === false ? null : detectMirrorSymmetry(mesh); // dispatch: mirrorSolve.ts
