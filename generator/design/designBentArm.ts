@@ -12,7 +12,7 @@
 import { createIpop, nelderMead, type HistoryEntry, type StopReason } from "../optimize/index.js";
 import { parameterBounds } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
-import { checkFrequencies, evaluate, shapeOf, specOf, type Evaluation } from "./objective.js";
+import { checkFrequencies, evaluate, isFeasible, shapeOf, specOf, type Evaluation } from "./objective.js";
 import { limitsOf, type DesignRequest } from "./request.js";
 
 export const SWEEP_POINTS_IN_BAND = 11;
@@ -79,7 +79,7 @@ export function designBentArm(
     const x = toX(z);
     const e = evaluate(x, r, freqs, limit);
     evaluations++;
-    const improved = e.score < 0 && (bestGain === null || -e.score > bestGain);
+    const improved = isFeasible(e) && (bestGain === null || -e.score > bestGain);
     if (improved) [bestGain, bestX] = [-e.score, x];
     if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain, bestX });
     return e.score;
@@ -120,7 +120,7 @@ export function designBentArm(
     const x = toX(zStart);
     const evaluation = evaluate(x, r, polishFrequencies, r.swrLimit);
     evaluations++;
-    if (evaluation.score >= 0 && evaluation.maxSwr !== null && !(evaluation.maxSwr <= options.skipPolishAboveSwr)) {
+    if (!isFeasible(evaluation) && evaluation.maxSwr !== null && !(evaluation.maxSwr <= options.skipPolishAboveSwr)) {
       const swrText = Number.isFinite(evaluation.maxSwr) ? evaluation.maxSwr.toFixed(1) : "∞";
       return {
         status: "infeasible",
@@ -146,7 +146,7 @@ export function designBentArm(
   history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + searchEvaluations, bestF: h.bestF })));
   const x = toX(polish.x);
   const evaluation = evaluate(x, r, polishFrequencies, r.swrLimit);
-  const feasible = evaluation.score < 0;
+  const feasible = isFeasible(evaluation);
   return {
     status: feasible ? "ok" : "infeasible",
     message: feasible ? "constraints met" : `no shape met every constraint: ${evaluation.reasons.join("; ")}`,

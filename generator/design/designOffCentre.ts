@@ -11,7 +11,7 @@ import { offCentreBounds } from "../shapes/offCentreConstraints.js";
 import { offCentreParameterCount } from "../shapes/offCentre.js";
 import { wavelengthM } from "../units.js";
 import { SWEEP_POINTS_IN_BAND, type DesignOutcome, type DesignProgress } from "./designBentArm.js";
-import { checkFrequencies } from "./objective.js";
+import { checkFrequencies, isFeasible } from "./objective.js";
 import { evaluateOffCentre, offCentreShapeOf, offCentreSpecOf } from "./offCentreObjective.js";
 import { limitsOf, type DesignRequest } from "./request.js";
 
@@ -33,7 +33,7 @@ export function designOffCentre(r: DesignRequest, options: { start?: number[]; p
     const x = toX(z);
     const e = evaluateOffCentre(x, r, freqs, limit);
     evaluations++;
-    const improved = e.score < 0 && (bestGain === null || -e.score > bestGain);
+    const improved = isFeasible(e) && (bestGain === null || -e.score > bestGain);
     if (improved) [bestGain, bestX] = [-e.score, [...x]];
     if (options.onProgress && (improved || evaluations % 20 === 0)) options.onProgress({ evaluations, bestGainDbi: bestGain, bestX });
     return e.score;
@@ -79,7 +79,7 @@ export function designOffCentre(r: DesignRequest, options: { start?: number[]; p
   history.push(...polish.history.map((h) => ({ evaluations: h.evaluations + searchEvaluations, bestF: h.bestF })));
   const x = toX(polish.x);
   const evaluation = evaluateOffCentre(x, r, polishFrequencies, r.swrLimit);
-  const feasible = evaluation.score < 0;
+  const feasible = isFeasible(evaluation);
   return {
     status: feasible ? "ok" : "infeasible",
     message: feasible ? "constraints met" : `no off-centre-fed shape met every constraint: ${evaluation.reasons.join("; ")}`,

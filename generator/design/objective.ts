@@ -27,6 +27,12 @@ export interface Evaluation {
   reasons: string[];
 }
 
+/**
+ * A shape that met every constraint: solved, and within the SWR limit where there is one. Not
+ * `score < 0`: over ground the gain in a narrow elevation window can be below 0 dBi, so −G > 0.
+ */
+export const isFeasible = (e: Evaluation): boolean => e.gainDbi !== null && e.reasons.length === 0;
+
 export function specOf(r: DesignRequest): BentArmSpec {
   return { piecesPerArm: r.piecesPerArm, wireLengthM: r.lengthWl * wavelengthM(r.frequencyHz) };
 }

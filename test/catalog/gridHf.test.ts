@@ -50,7 +50,7 @@ describe("over-ground grid validation", () => {
     expect(heightCurveHeightsM(g.overGround!, c)).toEqual([7, 13, 15]);
   });
   it("the HF grid's over-ground part parses and keeps the free-space cells as they were", () => {
-    const g = parseGrid(readFileSync("designs/grid-hf.yaml", "utf8"), "designs/grid-hf.yaml");
+    const g = parseGrid(readFileSync("designs/grid.yaml", "utf8"), "designs/grid.yaml");
     expect(allCells(g).filter((c) => c.kind === "free")).toHaveLength(g.bands.length * g.lengthsWl.length * g.piecesPerArm.length * g.variants.length);
   });
 });

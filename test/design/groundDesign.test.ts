@@ -66,3 +66,18 @@ describe("elevation-window objectives", () => {
     expect(evaluate(nvDesign.x, nv, [], 2).gainDbi!).toBeGreaterThanOrEqual(evaluate(dxDesign.x, nv, [], 2).gainDbi! - 1e-6);
   });
 });
+
+describe("a window gain below 0 dBi is still a design", () => {
+  // A level half-wave wire λ/2 over the ground has a null overhead: its direct and image fields
+  // arrive at the zenith with a path difference of 2h = λ and opposite currents (image theory,
+  // Balanis §4.7), so the best gain at 60–90° elevation lies below 0 dBi over average ground.
+  it("near-vertical window at λ/2 over average ground: status ok with a negative gain", () => {
+    const r = request({ lengthWl: 0.5, conductor: "copper", ground: { type: "real", relativePermittivity: 13, conductivitySPerM: 0.005 }, heightM: 0.5, objective: "near-vertical" });
+    const out = designBentArm(r);
+    expect(out.evaluation.gainDbi).not.toBeNull();
+    expect(out.evaluation.gainDbi!).toBeLessThan(0);
+    expect(out.evaluation.reasons).toEqual([]);
+    expect(out.status).toBe("ok");
+    expect(out.message).toBe("constraints met");
+  });
+});
