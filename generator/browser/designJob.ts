@@ -16,7 +16,7 @@ import { designResult, type DesignResult } from "../design/designResult.js";
 import { shapeOf } from "../design/objective.js";
 import { bandOf, type DesignRequest } from "../design/request.js";
 import { objectiveSolveOptions } from "../design/groundObjective.js";
-import { GROUND_PRESETS, type Ground } from "../em/ground.js";
+import { groundNameOf } from "./groundName.js";
 import { sha256Listing } from "../export/index.js";
 import { CHECKSUM_FILE } from "../site/downloads.js";
 import { patternCutSvg } from "../render/patternCutSvg.js";
@@ -56,13 +56,6 @@ export const evaluationBudget = (r: DesignRequest): number => {
   const n = 2 * r.piecesPerArm - 1;
   return (r.maxEvaluations ?? 500 * n + 500) + 60 * n;
 };
-
-/** The name a ground goes by: perfect, a preset's name, or "real" for any other. */
-export function groundNameOf(g: Ground): string {
-  if (g.type === "perfect") return "perfect";
-  const named = Object.entries(GROUND_PRESETS).find(([, p]) => p.relativePermittivity === g.relativePermittivity && p.conductivitySPerM === g.conductivitySPerM);
-  return named ? named[0] : "real";
-}
 
 /**
  * A file-name-safe id for a custom design: custom-<MHz>mhz-<L>wl-k<K>-<variant>, and over ground
