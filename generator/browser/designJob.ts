@@ -68,6 +68,22 @@ export function customId(r: DesignRequest): string {
   return `${free}-${groundNameOf(r.ground)}-h${roundSignificant(r.heightM!, 6)}m-${r.mounting ?? "horizontal"}-${r.objective ?? "peak"}`;
 }
 
+const f1 = (v: number) => v.toFixed(1);
+
+/** The lobe and mounting sentences of a design over ground. */
+function groundWords(r: DesignRequest, result: DesignResult, t: Takeoff): { lobe: string; mounting: string } {
+  const [lo, hi] = t.windowDeg;
+  const sky = result.peakElevationDeg === undefined || result.peakAzimuthDeg === undefined
+    ? ""
+    : `; in the whole sky the strongest is ${f1(result.peakElevationDeg)}° up at ${f1(result.peakAzimuthDeg)}°, ${result.peakGainDbi.toFixed(2)} dBi`;
+  const lobe = `Within ${lo}–${hi}° elevation the strongest direction is ${f1(t.elevationDeg)}° up at azimuth ${f1(t.azimuthDeg)}° (from +x toward +y)${sky}.`;
+  const h = roundSignificant(r.heightM!, 6);
+  const mounting = (r.mounting ?? "horizontal") === "vertical"
+    ? `The wire hangs in a vertical plane from the feed at the top, ${f1(result.feedHeightM ?? h)} m up; its lowest point is ${h} m above the ground.`
+    : `The wire plane is level at ${h} m above the ground: supports at the feed, at each bend and at each tip hold it there.`;
+  return { lobe, mounting };
+}
+
 /** The sentence a custom entry carries as its band note. */
 function noteOf(r: DesignRequest): string {
   if (!r.ground) return "Designed in the browser for the values in the form.";
@@ -119,15 +135,18 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
   const tolerance = { samples: DEFAULT_TOLERANCE.samples, bendSigmaDeg: DEFAULT_TOLERANCE.bendSigmaDeg, lengthSigmaFraction: DEFAULT_TOLERANCE.lengthSigmaFraction, seed: request.seed };
   // over ground the objective's window, as the search judged gain (none for peak, none in free space)
   const window = objectiveSolveOptions(request).elevationWindowDeg;
-  const analysis = outcome.status === "ok"
+  const analysed = outcome.status === "ok"
     ? analyzeDesign(shapeOf(outcome.x, request), { bandHz: band, lineImpedanceOhm: request.lineImpedanceOhm, tolerance, ...(window ? { elevationWindowDeg: window } : {}) }, cache)
     : null;
-  const takeoff: Takeoff | null = request.ground && analysis ? {
-    elevationDeg: 90 - analysis.design.peakDirection.thetaDeg,
-    azimuthDeg: analysis.design.peakDirection.phiDeg,
-    gainDbi: analysis.design.gainDbi,
+  const takeoff: Takeoff | null = request.ground && analysed ? {
+    elevationDeg: 90 - analysed.design.peakDirection.thetaDeg,
+    azimuthDeg: analysed.design.peakDirection.phiDeg,
+    gainDbi: analysed.design.gainDbi,
     windowDeg: window ?? [0, 90],
   } : null;
+  // over ground the mounting is given, so the free-space advice on turning the plane gives way to
+  // words about the lobe over the ground and the supports
+  const analysis = analysed && takeoff ? { ...analysed, pattern: { ...analysed.pattern, words: groundWords(request, result, takeoff) } } : analysed;
   const entry = buildEntry({
     grid: {} as Grid, // buildEntry reads nothing from the grid; a custom design has none
     cell: cellOf(request, band),

@@ -13,6 +13,7 @@ import { checkEntryText } from "../../generator/catalog/store.js";
 import { parseShape } from "../../generator/em/shapeFile.js";
 import { sha256Hex } from "../../generator/export/index.js";
 import { isOk } from "../../generator/site/ok.js";
+import { requestFromState, stateFromQuery } from "../../generator/browser/designerQuery.js";
 import { CACHE, ROOT, ensureSite, launchChromium, serve, watchedPage, type Browser, type PageWatch, type SiteBuild, type StaticServer } from "./harness.js";
 import { readEntries } from "./entries.js";
 
@@ -256,10 +257,12 @@ const GROUND_CASE = { freqMhz: "28.5", lengthWl: "1", pieces: "1", variant: "max
 const GROUND_FLAGS = ["--freq-mhz", "28.5", "--length-wl", "1", "--pieces", "1", "--variant", "max-gain", "--wire-diameter-mm", "2", "--conductor", "copper", "--seed", "1", "--ground", "average", "--height-m", "10"];
 
 describe("designer page over ground", () => {
+  let ref: Record<string, any>;
+
   it("a run from a URL with run=1 over average ground publishes design --json's result, shows the ground figures, and its shape file analyzes the same", async () => {
     const fromCli = await cli(["design", ...GROUND_FLAGS, "--json"]);
     expect(fromCli.code, fromCli.stderr).toBe(0);
-    const ref = JSON.parse(fromCli.stdout);
+    ref = JSON.parse(fromCli.stdout);
     const w = await watchedPage(browser);
     await w.page.goto(url({ ...GROUND_CASE, run: "1" }));
     await finished(w.page);
@@ -297,6 +300,21 @@ describe("designer page over ground", () => {
     expect(Math.abs(a.peakElevationDeg - got.peakElevationDeg)).toBeLessThan(1e-6);
     expectLocal(w);
     await w.page.close();
+  }, 300_000);
+
+  it("the worker bundle over ground, run under Node on the page's request, gives design --json's result bit for bit", async () => {
+    const worker = readdirSync(join(site.dir, "_astro")).find((n) => /^designer-.*\.js$/.test(n))!;
+    const runner = join(CACHE, "designer-bundle-runner-ground.mjs");
+    writeFileSync(runner, [
+      "import { pathToFileURL } from 'node:url';",
+      "globalThis.self = globalThis;",
+      "self.postMessage = (m) => { if (m.type === 'done') process.stdout.write(JSON.stringify(m.result)); if (m.type === 'error') process.stderr.write(m.message); };",
+      "await import(pathToFileURL(process.argv[2]).href);",
+      "self.onmessage({ data: { request: JSON.parse(process.argv[3]) } });",
+    ].join("\n"));
+    const request = requestFromState(stateFromQuery(`?${new URLSearchParams(GROUND_CASE)}`));
+    const { stdout } = await promisify(execFile)(process.execPath, [runner, join(site.dir, "_astro", worker), JSON.stringify(request)], { maxBuffer: 1 << 26 });
+    expect(JSON.parse(stdout)).toEqual(ref);
   }, 300_000);
 
   it("a bad height shows the CLI's message and starts nothing", async () => {
