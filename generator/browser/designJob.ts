@@ -4,6 +4,9 @@
 // a catalog one), the catalog's renderers and download writers. No DOM, no Node: the caller passes
 // `post`, which the worker wires to postMessage. The result is posted ("designed") as soon as the
 // search ends; the full analysis (64 bent copies for gain and SWR, feed options) follows in "done".
+// Over ground (request.ground) the search, the result and the analysis are the command line's over
+// ground: the objective's elevation window judges gain, and the shape file offered is the one
+// `design --out` writes (the wire as mounted, with its ground), so `analyze` on it gives the result.
 import { analyzeDesign, DEFAULT_TOLERANCE, type SolveCache } from "../analysis/index.js";
 import { buildEntry } from "../catalog/entryBuild.js";
 import type { CellRequest, Grid } from "../catalog/grid.js";
@@ -12,6 +15,10 @@ import { designBentArm } from "../design/designBentArm.js";
 import { designResult, type DesignResult } from "../design/designResult.js";
 import { shapeOf } from "../design/objective.js";
 import { bandOf, type DesignRequest } from "../design/request.js";
+import { objectiveSolveOptions } from "../design/groundObjective.js";
+import { groundNameOf } from "./groundName.js";
+import { sha256Listing } from "../export/index.js";
+import { CHECKSUM_FILE } from "../site/downloads.js";
 import { patternCutSvg } from "../render/patternCutSvg.js";
 import { pattern3dSvg } from "../render/pattern3dSvg.js";
 import { shapeSvg } from "../render/shapeSvg.js";
@@ -28,8 +35,11 @@ export type JobMessage =
   | { type: "analysing"; evaluations: number }
   /** The search's result as `design --json` gives it, sent before the slower analysis so the page can show it at once. */
   | { type: "designed"; result: DesignResult }
-  | { type: "done"; result: DesignResult; entry: Entry; figures: Figures | null; tables: Tables | null; files: DownloadFile[]; rows: DownloadRow[] }
+  | { type: "done"; result: DesignResult; entry: Entry; figures: Figures | null; tables: Tables | null; files: DownloadFile[]; rows: DownloadRow[]; takeoff: Takeoff | null }
   | { type: "error"; message: string; input: boolean };
+
+/** Over ground: the strongest direction within the objective's elevation window, on the analysis's converged mesh. */
+export interface Takeoff { elevationDeg: number; azimuthDeg: number; gainDbi: number; windowDeg: [number, number] }
 
 export interface Figures { shape: string; phi: string; theta: string; sweep: string; smith: string; pattern3d: string }
 export interface Tables {
@@ -47,10 +57,39 @@ export const evaluationBudget = (r: DesignRequest): number => {
   return (r.maxEvaluations ?? 500 * n + 500) + 60 * n;
 };
 
-/** A file-name-safe id for a custom design: custom-<MHz>mhz-<L>wl-k<K>-<variant>. */
+/**
+ * A file-name-safe id for a custom design: custom-<MHz>mhz-<L>wl-k<K>-<variant>, and over ground
+ * -<ground>-h<H>m-<mounting>-<objective>.
+ */
 export function customId(r: DesignRequest): string {
   const mhz = roundSignificant(r.frequencyHz / 1e6, 7);
-  return `custom-${mhz}mhz-${roundSignificant(r.lengthWl, 6)}wl-k${r.piecesPerArm}-${r.variant}`;
+  const free = `custom-${mhz}mhz-${roundSignificant(r.lengthWl, 6)}wl-k${r.piecesPerArm}-${r.variant}`;
+  if (!r.ground) return free;
+  return `${free}-${groundNameOf(r.ground)}-h${roundSignificant(r.heightM!, 6)}m-${r.mounting ?? "horizontal"}-${r.objective ?? "peak"}`;
+}
+
+const f1 = (v: number) => v.toFixed(1);
+
+/** The lobe and mounting sentences of a design over ground. */
+function groundWords(r: DesignRequest, result: DesignResult, t: Takeoff): { lobe: string; mounting: string } {
+  const [lo, hi] = t.windowDeg;
+  const sky = result.peakElevationDeg === undefined || result.peakAzimuthDeg === undefined
+    ? ""
+    : `; in the whole sky the strongest is ${f1(result.peakElevationDeg)}° up at ${f1(result.peakAzimuthDeg)}°, ${result.peakGainDbi.toFixed(2)} dBi`;
+  const lobe = `Within ${lo}–${hi}° elevation the strongest direction is ${f1(t.elevationDeg)}° up at azimuth ${f1(t.azimuthDeg)}° (from +x toward +y)${sky}.`;
+  const h = roundSignificant(r.heightM!, 6);
+  const mounting = (r.mounting ?? "horizontal") === "vertical"
+    ? `The wire hangs in a vertical plane from the feed at the top, ${f1(result.feedHeightM ?? h)} m up; its lowest point is ${h} m above the ground.`
+    : `The wire plane is level at ${h} m above the ground: supports at the feed, at each bend and at each tip hold it there.`;
+  return { lobe, mounting };
+}
+
+/** The sentence a custom entry carries as its band note. */
+function noteOf(r: DesignRequest): string {
+  if (!r.ground) return "Designed in the browser for the values in the form.";
+  const h = roundSignificant(r.heightM!, 6);
+  const support = (r.mounting ?? "horizontal") === "vertical" ? `vertical, lowest point ${h} m up` : `horizontal at ${h} m`;
+  return `Designed in the browser for the values in the form, over ${groundNameOf(r.ground)} ground, ${support}, objective ${r.objective ?? "peak"}.`;
 }
 
 /** The catalog cell a custom design stands in (a band of its own, named by its edges). */
@@ -59,7 +98,7 @@ function cellOf(r: DesignRequest, band: [number, number]): CellRequest {
   const [lo, hi] = band.map((v) => roundSignificant(v / 1e6, 7));
   return {
     id: customId(r),
-    band: { id: "custom", name: `Custom ${lo}–${hi} MHz`, lowMhz: lo, highMhz: hi, designMhz: r.frequencyHz / 1e6, wireDiameterMm: r.wireDiameterM * 1000, conductor, note: "Designed in the browser for the values in the form." },
+    band: { id: "custom", name: `Custom ${lo}–${hi} MHz`, lowMhz: lo, highMhz: hi, designMhz: r.frequencyHz / 1e6, wireDiameterMm: r.wireDiameterM * 1000, conductor, note: noteOf(r) },
     lengthWl: r.lengthWl,
     piecesPerArm: r.piecesPerArm,
     variant: r.variant,
@@ -94,9 +133,20 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
   post({ type: "designed", result });
   const band = bandOf(request);
   const tolerance = { samples: DEFAULT_TOLERANCE.samples, bendSigmaDeg: DEFAULT_TOLERANCE.bendSigmaDeg, lengthSigmaFraction: DEFAULT_TOLERANCE.lengthSigmaFraction, seed: request.seed };
-  const analysis = outcome.status === "ok"
-    ? analyzeDesign(shapeOf(outcome.x, request), { bandHz: band, lineImpedanceOhm: request.lineImpedanceOhm, tolerance }, cache)
+  // over ground the objective's window, as the search judged gain (none for peak, none in free space)
+  const window = objectiveSolveOptions(request).elevationWindowDeg;
+  const analysed = outcome.status === "ok"
+    ? analyzeDesign(shapeOf(outcome.x, request), { bandHz: band, lineImpedanceOhm: request.lineImpedanceOhm, tolerance, ...(window ? { elevationWindowDeg: window } : {}) }, cache)
     : null;
+  const takeoff: Takeoff | null = request.ground && analysed ? {
+    elevationDeg: 90 - analysed.design.peakDirection.thetaDeg,
+    azimuthDeg: analysed.design.peakDirection.phiDeg,
+    gainDbi: analysed.design.gainDbi,
+    windowDeg: window ?? [0, 90],
+  } : null;
+  // over ground the mounting is given, so the free-space advice on turning the plane gives way to
+  // words about the lobe over the ground and the supports
+  const analysis = analysed && takeoff ? { ...analysed, pattern: { ...analysed.pattern, words: groundWords(request, result, takeoff) } } : analysed;
   const entry = buildEntry({
     grid: {} as Grid, // buildEntry reads nothing from the grid; a custom design has none
     cell: cellOf(request, band),
@@ -119,6 +169,19 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
   const tables: Tables | null = ok && {
     keyFigures: keyFigures(ok), pieces: pieceRows(ok), vertices: vertexRows(ok), match: matchRows(ok), tolerance: toleranceRows(ok), checks: checkRows(ok),
   };
-  const files = await downloadFiles(entry, new Map(), { pdf: false }); // the 1:1 SVG sheets; no PDF in the worker
-  post({ type: "done", result, entry, figures, tables, files, rows: downloadRows(files) });
+  const files = groundShapeFile(await downloadFiles(entry, new Map(), { pdf: false }), request, result); // the 1:1 SVG sheets; no PDF in the worker
+  post({ type: "done", result, entry, figures, tables, files, rows: downloadRows(files), takeoff });
+}
+
+/**
+ * Over ground the shape file is the one `design --out` writes (the result's shape: mounted, with its
+ * ground), and the checksum list is made again over the files; in free space the files stay as made.
+ */
+export function groundShapeFile(files: DownloadFile[], request: DesignRequest, result: DesignResult): DownloadFile[] {
+  if (!request.ground || !files.some((f) => f.group === "shape")) return files;
+  const swapped = files
+    .filter((f) => f.name !== CHECKSUM_FILE)
+    .map((f) => (f.group === "shape" ? { ...f, label: "shape file over ground (loads into bentwire analyze)", content: `${JSON.stringify(result.shape, null, 2)}\n` } : f));
+  const sums = files.find((f) => f.name === CHECKSUM_FILE)!;
+  return [...swapped, { ...sums, content: sha256Listing(swapped.map((f) => ({ name: f.name, content: f.content }))) }];
 }

@@ -3,8 +3,12 @@
 // No schema here, so a design page that links in carries none of the designer's code.
 import { at } from "../site/paths.js";
 
-/** Query keys, in the order a link writes them. Ground fields join here once the solver has ground. */
-export const QUERY_KEYS = ["freqMhz", "bandMhz", "lengthWl", "lengthM", "pieces", "variant", "wireDiameterMm", "conductor", "seed"] as const;
+/**
+ * Query keys, in the order a link writes them. The ground fields last: `ground` (empty = free space,
+ * else perfect or a preset name), `heightM`, `mounting` and `objective` (empty = the command line's
+ * defaults, horizontal and peak).
+ */
+export const QUERY_KEYS = ["freqMhz", "bandMhz", "lengthWl", "lengthM", "pieces", "variant", "wireDiameterMm", "conductor", "seed", "ground", "heightM", "mounting", "objective"] as const;
 export type QueryKey = (typeof QUERY_KEYS)[number];
 export type FormState = Record<QueryKey, string>;
 
@@ -32,12 +36,31 @@ export interface DesignInputsOfEntry {
   wireDiameterM: number;
   conductor: string;
   seed: number;
+  /** An entry over ground (entrySchema.ts inputs.overGround): its ground preset, support height, mounting and purpose. */
+  overGround?: { groundName: string; heightM: number; mounting: string; purpose: string };
+}
+
+/**
+ * The ground fields of an entry: its preset, mounting and purpose (the designer's objective of the
+ * same name and window). A horizontal entry's height is its wire plane, as the designer reads it
+ * (× factor, a length like any other); a vertical entry's is its mast top, which the designer (like
+ * `design --height-m`) does not take, since its vertical height is the lowest point: left empty, so
+ * the visitor gives it and the form says so if they do not.
+ */
+function groundStateOf(o: DesignInputsOfEntry["overGround"], factor: number): Pick<FormState, "ground" | "heightM" | "mounting" | "objective"> {
+  if (!o) return { ground: "", heightM: "", mounting: "", objective: "" };
+  return {
+    ground: o.groundName,
+    heightM: o.mounting === "horizontal" ? num(o.heightM * factor) : "",
+    mounting: o.mounting,
+    objective: o.purpose,
+  };
 }
 
 /**
  * The form state that redesigns an entry, every length × `factor` = f_design / f_new (the scale
  * calculator's factor; 1 for "re-optimize for my wire"): frequency and band edges ÷ factor, the wire
- * length in wavelengths unchanged, the wire diameter × factor.
+ * length in wavelengths unchanged, the wire diameter × factor; over ground the ground fields too.
  */
 export function stateOfEntry(i: DesignInputsOfEntry, factor = 1): FormState {
   return {
@@ -50,5 +73,6 @@ export function stateOfEntry(i: DesignInputsOfEntry, factor = 1): FormState {
     wireDiameterMm: num(i.wireDiameterM * factor * 1000),
     conductor: i.conductor,
     seed: String(i.seed),
+    ...groundStateOf(i.overGround, factor),
   };
 }

@@ -4,7 +4,8 @@
 // so the same value fails with the same message in the page and in `bentwire design`.
 import { InputError } from "../errors.js";
 import type { DesignRequest } from "../design/request.js";
-import { requestFromInputs, type DesignInputs, type InputNames } from "../design/requestInput.js";
+import { heightMOfText, requestFromInputs, type DesignInputs, type InputNames } from "../design/requestInput.js";
+import { groundByName, type Ground } from "../em/ground.js";
 import { QUERY_KEYS, type FormState, type QueryKey } from "./designerLinks.js";
 
 export { queryOf, QUERY_KEYS, type FormState, type QueryKey } from "./designerLinks.js";
@@ -12,6 +13,7 @@ export { queryOf, QUERY_KEYS, type FormState, type QueryKey } from "./designerLi
 /** What the form shows before anyone types: the CLI's defaults where it has them. */
 export const DEFAULT_STATE: FormState = {
   freqMhz: "", bandMhz: "", lengthWl: "", lengthM: "", pieces: "", variant: "max-gain", wireDiameterMm: "2", conductor: "copper", seed: "1",
+  ground: "", heightM: "", mounting: "", objective: "",
 };
 
 export const QUERY_NAMES: InputNames = { freqMhz: "freqMhz", lengthWl: "lengthWl", lengthM: "lengthM", pieces: "pieces" };
@@ -55,10 +57,16 @@ function band(text: string): [number, number] | undefined {
   return [parts[0] * 1e6, parts[1] * 1e6];
 }
 
-/** The field a message is about (the first query key it names), so the form can mark it. */
+/** Over ground: "perfect" or a preset name, by the command line's own lookup (empty: free space). */
+function groundOf(text: string): Ground | undefined {
+  return text.trim() === "" ? undefined : groundByName(text.trim(), "design: ground");
+}
+
+/** The field a message is about (the query key it names first), so the form can mark it. */
 export function fieldOfMessage(message: string): QueryKey | null {
   const aliases: [RegExp, QueryKey][] = [[/\bfrequencyHz\b/, "freqMhz"], [/\bpiecesPerArm\b/, "pieces"], [/\bwireDiameterM\b/, "wireDiameterMm"], [/\bbandHz\b/, "bandMhz"], [/\bband\b/, "bandMhz"]];
-  const named = QUERY_KEYS.filter((k) => new RegExp(`\\b${k}\\b`).test(message));
+  const at = (k: QueryKey) => message.search(new RegExp(`\\b${k}\\b`));
+  const named = QUERY_KEYS.filter((k) => at(k) >= 0).sort((a, b) => at(a) - at(b));
   if (named.length) return named[0];
   return aliases.find(([re]) => re.test(message))?.[1] ?? null;
 }
@@ -75,6 +83,14 @@ export function requestFromState(state: FormState): DesignRequest {
     conductor: state.conductor || "copper",
     variant: state.variant || "max-gain",
     seed: whole("seed", state.seed, 0, 2 ** 31 - 1) ?? 1,
+    ground: groundOf(state.ground),
+    heightM: state.heightM.trim() === "" ? undefined : heightMOfText(state.heightM, "design: heightM"),
   };
+  // the command line's defaults over ground (horizontal, peak); in free space only what was given, so
+  // a free-space request stays the object it was before the ground fields existed
+  const mounting = state.mounting.trim() || (inputs.ground ? "horizontal" : "");
+  const objective = state.objective.trim() || (inputs.ground ? "peak" : "");
+  if (mounting) inputs.mounting = mounting;
+  if (objective) inputs.objective = objective;
   return requestFromInputs(inputs, QUERY_NAMES, "design");
 }

@@ -6,6 +6,7 @@ import { groundByName, GROUND_NAMES, type Ground } from "../em/ground.js";
 import { validateShape, type Shape } from "../em/index.js";
 import type { Solution } from "../em/solve.js";
 import { InputError } from "../errors.js";
+import { heightMOfText } from "../design/requestInput.js";
 import { fixed } from "./format.js";
 import { groundSummary, type GroundSummary } from "../analysis/solutionSummary.js";
 
@@ -25,9 +26,11 @@ export function groundName(flag: string) {
 
 export function heightM(flag: string) {
   return (text: string): number => {
-    const v = Number(text);
-    if (text.trim() === "" || !Number.isFinite(v) || v < 0) throw new InvalidArgumentError(`${flag} must be a number of metres, 0 or more`);
-    return v;
+    try {
+      return heightMOfText(text, flag);
+    } catch (err) {
+      throw new InvalidArgumentError((err as Error).message);
+    }
   };
 }
 

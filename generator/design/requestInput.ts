@@ -33,6 +33,16 @@ export interface InputNames {
   pieces: string;
 }
 
+/**
+ * A support height as a person types it (metres): the first rule of the command line's --height-m and
+ * of the designer's heightM field, before the request schema's own (above 0, at least 5 wire diameters).
+ */
+export function heightMOfText(text: string, name: string): number {
+  const v = Number(text);
+  if (text.trim() === "" || !Number.isFinite(v) || v < 0) throw new InputError(`${name} must be a number of metres, 0 or more`);
+  return v;
+}
+
 export const FLAG_NAMES: InputNames = { freqMhz: "--freq-mhz", lengthWl: "--length-wl", lengthM: "--length-m", pieces: "--pieces" };
 
 export function requestFromInputs(inputs: DesignInputs, names: InputNames = FLAG_NAMES, label = "design"): DesignRequest {

@@ -13,6 +13,7 @@ import { checkEntryText } from "../../generator/catalog/store.js";
 import { parseShape } from "../../generator/em/shapeFile.js";
 import { sha256Hex } from "../../generator/export/index.js";
 import { isOk } from "../../generator/site/ok.js";
+import { requestFromState, stateFromQuery } from "../../generator/browser/designerQuery.js";
 import { CACHE, ROOT, ensureSite, launchChromium, serve, watchedPage, type Browser, type PageWatch, type SiteBuild, type StaticServer } from "./harness.js";
 import { readEntries } from "./entries.js";
 
@@ -247,4 +248,88 @@ describe("designer page", () => {
     expectLocal(w);
     await w.page.close();
   }, 180_000);
+});
+
+// Over ground: the same run as `design --ground average --height-m 10` (a 1 λ straight wire 10 m over
+// average ground at 28.5 MHz: one piece per arm, a few hundred evaluations), its figures over ground
+// in the page, and a shape file that carries the ground so `analyze` gives the same figures.
+const GROUND_CASE = { freqMhz: "28.5", lengthWl: "1", pieces: "1", variant: "max-gain", wireDiameterMm: "2", conductor: "copper", seed: "1", ground: "average", heightM: "10" };
+const GROUND_FLAGS = ["--freq-mhz", "28.5", "--length-wl", "1", "--pieces", "1", "--variant", "max-gain", "--wire-diameter-mm", "2", "--conductor", "copper", "--seed", "1", "--ground", "average", "--height-m", "10"];
+
+describe("designer page over ground", () => {
+  let ref: Record<string, any>;
+
+  it("a run from a URL with run=1 over average ground publishes design --json's result, shows the ground figures, and its shape file analyzes the same", async () => {
+    const fromCli = await cli(["design", ...GROUND_FLAGS, "--json"]);
+    expect(fromCli.code, fromCli.stderr).toBe(0);
+    ref = JSON.parse(fromCli.stdout);
+    const w = await watchedPage(browser);
+    await w.page.goto(url({ ...GROUND_CASE, run: "1" }));
+    await finished(w.page);
+    const got = JSON.parse((await w.page.locator("#design-result").textContent())!);
+    expect(Object.keys(got).sort()).toEqual(Object.keys(ref).sort());
+    expect(got.status).toBe("ok");
+    expect(got.ground).toEqual({ type: "real", relativePermittivity: 13, conductivitySPerM: 5e-3 });
+    expect(Math.abs(got.peakGainDbi - ref.peakGainDbi), "gain vs the CLI (dB)").toBeLessThan(1e-6);
+    expect(Math.abs(got.objectiveGainDbi - ref.objectiveGainDbi), "objective gain vs the CLI (dB)").toBeLessThan(1e-6);
+    expect(maxDiff(got.gainAtElevationDbi.map((e: { gainDbi: number }) => e.gainDbi), ref.gainAtElevationDbi.map((e: { gainDbi: number }) => e.gainDbi))).toBeLessThan(1e-6);
+    expect(Math.abs(got.peakElevationDeg - ref.peakElevationDeg)).toBeLessThan(1e-6);
+    expect(maxDiff(nodes(got), nodes(ref)), "nodes vs the CLI (m)").toBeLessThan(1e-9);
+    expect({ mounting: got.mounting, objective: got.objective, feedHeightM: got.feedHeightM }).toEqual({ mounting: ref.mounting, objective: ref.objective, feedHeightM: ref.feedHeightM });
+    // the figures the CLI reports over ground, as text in the result
+    const rows = await w.page.$$eval('table[data-table="ground"] tr', (trs) => trs.map((tr) => tr.textContent ?? ""));
+    expect(rows.find((r) => r.startsWith("Peak gain"))).toContain(`${ref.peakGainDbi.toFixed(2)} dBi at ${ref.peakElevationDeg.toFixed(1)}° elevation`);
+    expect(rows.some((r) => r.startsWith("Takeoff"))).toBe(true);
+    expect(rows.some((r) => r.startsWith("Ground loss") && r.includes("% of the input power"))).toBe(true);
+    expect(await w.page.locator('table[data-table="elevations"] tbody tr').count()).toBe(ref.gainAtElevationDbi.length);
+    // the shape file: the wire as mounted, with its ground, the bytes `design --out` writes
+    const name = (await w.page.getAttribute('[data-result] a[download$=".shape.json"]', "download"))!;
+    expect(name).toBe("custom-28.5mhz-1wl-k1-max-gain-average-h10m-horizontal-peak.shape.json");
+    const [dl] = await Promise.all([w.page.waitForEvent("download", { timeout: 30_000 }), w.page.click(`a[download="${name}"]`)]);
+    const text = readFileSync((await dl.path())!, "utf8");
+    const shape = parseShape(text);
+    expect(shape.ground).toEqual(got.ground);
+    expect(maxDiff(shape.wires[0].pointsM.flat(), nodes(got))).toBe(0);
+    const dir = join(CACHE, "designer-downloads");
+    mkdirSync(dir, { recursive: true });
+    writeFileSync(join(dir, "ground.shape.json"), text);
+    const analyzed = await cli(["analyze", join(dir, "ground.shape.json"), "--json"]);
+    expect(analyzed.code, analyzed.stderr).toBe(0);
+    const a = JSON.parse(analyzed.stdout);
+    expect(Math.abs(a.peakGainDbi - got.peakGainDbi), "analyze of the downloaded shape vs the page (dB)").toBeLessThan(1e-6);
+    expect(Math.abs(a.peakElevationDeg - got.peakElevationDeg)).toBeLessThan(1e-6);
+    expectLocal(w);
+    await w.page.close();
+  }, 300_000);
+
+  it("the worker bundle over ground, run under Node on the page's request, gives design --json's result bit for bit", async () => {
+    const worker = readdirSync(join(site.dir, "_astro")).find((n) => /^designer-.*\.js$/.test(n))!;
+    const runner = join(CACHE, "designer-bundle-runner-ground.mjs");
+    writeFileSync(runner, [
+      "import { pathToFileURL } from 'node:url';",
+      "globalThis.self = globalThis;",
+      "self.postMessage = (m) => { if (m.type === 'done') process.stdout.write(JSON.stringify(m.result)); if (m.type === 'error') process.stderr.write(m.message); };",
+      "await import(pathToFileURL(process.argv[2]).href);",
+      "self.onmessage({ data: { request: JSON.parse(process.argv[3]) } });",
+    ].join("\n"));
+    const request = requestFromState(stateFromQuery(`?${new URLSearchParams(GROUND_CASE)}`));
+    const { stdout } = await promisify(execFile)(process.execPath, [runner, join(site.dir, "_astro", worker), JSON.stringify(request)], { maxBuffer: 1 << 26 });
+    expect(JSON.parse(stdout)).toEqual(ref);
+  }, 300_000);
+
+  it("a bad height shows the CLI's message and starts nothing", async () => {
+    const w = await watchedPage(browser);
+    await w.page.goto(url({ ...GROUND_CASE, heightM: "0", run: "1" }), { waitUntil: "networkidle" });
+    const shown = (await w.page.locator("[data-form-message]").textContent())!;
+    const fromCli = await cli(["design", ...GROUND_FLAGS.slice(0, -1), "0", "--json"]);
+    expect(fromCli.code).toBe(2);
+    expect(shown).toBe("design: heightM: heightM must be a positive number");
+    expect(fromCli.stderr.trim()).toBe(shown);
+    expect(await w.page.getAttribute("input[name=heightM]", "aria-invalid")).toBe("true");
+    expect(await w.page.locator("#design-result").count()).toBe(0);
+    expect(await w.page.locator("[data-progress]").isHidden()).toBe(true);
+    expect(w.requests.filter((u) => /designer-[^/]*\.js$/.test(u)), "worker script fetched").toEqual([]);
+    expectLocal(w);
+    await w.page.close();
+  });
 });

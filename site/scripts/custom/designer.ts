@@ -22,6 +22,18 @@ const resultBox = document.querySelector<HTMLElement>("[data-result]")!;
 const bands = JSON.parse(form.dataset.bands ?? "[]") as CatalogBand[];
 const field = (name: string) => form.elements.namedItem(name) as HTMLInputElement | HTMLSelectElement;
 
+/** A select shows the value asked for, even one it does not list (added as text), so the check names it. */
+function setSelect(name: string, value: string): void {
+  const sel = field(name) as HTMLSelectElement;
+  if (value !== "" && ![...sel.options].some((o) => o.value === value)) {
+    const o = document.createElement("option");
+    o.value = value;
+    o.textContent = value;
+    sel.append(o);
+  }
+  sel.value = value;
+}
+
 function writeForm(s: FormState): void {
   field("freqMhz").value = s.freqMhz;
   const [lo, hi] = s.bandMhz.includes(":") ? s.bandMhz.split(":") : [s.bandMhz, ""];
@@ -31,10 +43,14 @@ function writeForm(s: FormState): void {
   field("lengthUnit").value = metres ? "m" : "wl";
   field("length").value = metres ? s.lengthM : s.lengthWl;
   field("pieces").value = s.pieces;
-  field("variant").value = s.variant;
+  setSelect("variant", s.variant);
   field("wireDiameterMm").value = s.wireDiameterMm;
-  field("conductor").value = s.conductor;
+  setSelect("conductor", s.conductor);
   field("seed").value = s.seed;
+  setSelect("ground", s.ground);
+  field("heightM").value = s.heightM;
+  setSelect("mounting", s.mounting || "horizontal");
+  setSelect("objective", s.objective || "peak");
 }
 
 function readForm(): FormState {
@@ -51,6 +67,11 @@ function readForm(): FormState {
     wireDiameterMm: v("wireDiameterMm"),
     conductor: v("conductor"),
     seed: v("seed"),
+    ground: v("ground"),
+    heightM: v("heightM"),
+    // the command line's defaults stay out of the URL (an empty field means the default)
+    mounting: v("mounting") === "horizontal" ? "" : v("mounting"),
+    objective: v("objective") === "peak" ? "" : v("objective"),
   };
 }
 

@@ -6,6 +6,8 @@ import type { DesignResult } from "../../../generator/design/designResult";
 import type { JobMessage } from "../../../generator/browser/designJob";
 import type { Shown } from "../../../generator/site/shown";
 import * as f from "../../../generator/site/format";
+import { groundView } from "../../../generator/browser/groundView";
+import type { Takeoff } from "../../../generator/browser/designJob";
 
 type Done = Extract<JobMessage, { type: "done" }>;
 type Child = Node | string | null | undefined | false;
@@ -26,6 +28,26 @@ const factsTable = (name: string, rows: { label: string; parts: Shown[]; note?: 
     ...rows.map((r) => h("tr", {}, h("th", { scope: "row" }, r.label), h("td", {}, ...shownNodes(r.parts), r.note ? h("span", { class: "note-inline" }, r.note) : null))))));
 
 const svgImg = (svg: string, alt: string) => h("img", { src: `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`, alt });
+
+/** Over ground: the figures `design` reports there, and the gain at the planning elevations (nothing in free space). */
+function groundSection(r: DesignResult, takeoff: Takeoff | null): HTMLElement | null {
+  const view = groundView(r, takeoff);
+  if (!view) return null;
+  return h("section", { "data-ground": "" },
+    h("h2", {}, "Over the ground"),
+    h("div", { class: "two" },
+      h("div", { class: "table-wrap" }, h("table", { class: "facts", "data-table": "ground" }, h("tbody", {},
+        ...view.rows.map((row) => h("tr", {}, h("th", { scope: "row" }, row.label), h("td", {}, row.text)))))),
+      h("div", { class: "table-wrap" }, h("table", { "data-table": "elevations" },
+        h("caption", { class: "small" }, "Gain by elevation, at the peak azimuth"),
+        h("thead", {}, h("tr", {}, h("th", { scope: "col" }, "Elevation"), h("th", { scope: "col", class: "num" }, "Gain (dBi)"))),
+        h("tbody", {}, ...view.elevations.map((e) => h("tr", {}, h("td", {}, e.elevation), h("td", { class: "num" }, e.gain))))))),
+    h("p", { class: "muted small" }, r.ground?.type === "perfect"
+      ? "Model: image theory over an infinite perfect ground. A real ground absorbs power and lowers the low-angle field."
+      : "Model: image theory with plane-wave reflection coefficients for the ground; no surface wave, and approximate for wires within a small fraction of a wavelength of the ground. Gains count the power the ground absorbs as loss."),
+    h("p", { class: "note small" }, "Keep masts and wires well clear of power lines (farther than the mast is tall), ground the mast against lightning, and keep people away from low wires while transmitting; local codes and licensed practice come first."),
+  );
+}
 
 let blobUrls: string[] = [];
 
@@ -77,6 +99,7 @@ export function renderDesigned(r: DesignResult, box: HTMLElement): void {
       h("thead", {}, h("tr", {}, ...["Piece (from the feed)", "Length (mm)", "Length (in)", "Bend at its outer end"].map((c, k) => h("th", { scope: "col", class: k ? "num" : "" }, c)))),
       h("tbody", {}, ...p.pieceLengthsM.map((len, k) => h("tr", {}, h("td", {}, String(k + 1)), h("td", { class: "num" }, f.millimetresNumber(len)), h("td", { class: "num" }, f.inchesNumber(len)),
         h("td", { class: "num" }, k < p.bendAnglesDeg.length ? f.degrees(p.bendAnglesDeg[k]) : "tip")))))),
+    groundSection(r, null),
     h("p", { class: "note", "data-analysing": "" }, "The drawings, band sweep, feed options, bending tolerance and downloads follow when the analysis ends (see the progress above)."),
   );
 }
@@ -106,7 +129,10 @@ export function renderResult(m: Done, box: HTMLElement): void {
       h("figure", {}, svgImg(m.figures.smith, "Feed-point impedance across the band on a Smith chart")),
       h("figure", {}, svgImg(m.figures.pattern3d, "Three-dimensional view of the radiation pattern")),
       h("div", { class: "panel lobe" }, h("h3", {}, "Main lobe and mounting"), h("p", {}, fig.lobe), h("p", {}, fig.mounting),
-        h("p", { class: "muted small" }, "All figures are for the wire alone in free space. Ground, a mast, guy wires and the feed line change them; keep the wire a wavelength or more from other conductors where you can."))),
+        h("p", { class: "muted small" }, m.result.ground
+          ? "All figures are for the wire over the ground and at the height you gave, as mounted; a mast, guy wires and the feed line change them. The drawing and the templates show the wire flat, as you bend it."
+          : "All figures are for the wire alone in free space. Ground, a mast, guy wires and the feed line change them; keep the wire a wavelength or more from other conductors where you can."))),
+    groundSection(m.result, m.takeoff),
     h("h2", {}, "Figures"), factsTable("figures", t.keyFigures),
     h("h2", {}, "Dimensions"),
     h("p", {}, `Each arm has ${f.piecesPerArm(i.piecesPerArm).replace(" per arm", "")}; the left arm is the mirror image of the right arm across the symmetry axis (y). The first piece of the right arm leaves the feed at ${f.degrees(e.shape.firstAngleDeg)} from the symmetry axis toward +x. Lengths are along the wire centreline; a bend turns the wire toward +x by the angle given (the left arm turns the other way).`),
