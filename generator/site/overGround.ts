@@ -34,6 +34,8 @@ export type Mounting = keyof typeof MOUNTING_WORDS;
 export type Purpose = keyof typeof PURPOSE_WORDS;
 
 const METRE_PER_FOOT = METRE_PER_INCH * 12;
+/** Metres to the centimetre, trailing zeros dropped ("10 m", "14.88 m"): heights and distances on the ground. */
+export const metresShort = (v: number): string => `${f.trimZeros(f.fixed(v, 2))} m`;
 const n = (v: number): string => (Math.round(v * 10) / 10).toString();
 const rad = (deg: number) => (deg * Math.PI) / 180;
 
@@ -54,6 +56,8 @@ export interface ElevationSeries {
   /** Gain every stepDeg from the horizon (0°) over the zenith (90°) to the far horizon (180°). */
   gainDbi: readonly number[];
   stepDeg: number;
+  /** Colour class; by default the series' place (s1, s2, s3). */
+  cls?: string;
 }
 
 export interface ElevationChart {
@@ -81,7 +85,7 @@ export function elevationChartSvg(c: ElevationChart): string {
   const range = c.rangeDb ?? ELEVATION_RANGE_DB;
   const rMax = w / 2 - 40;
   const cx = w / 2, cy = rMax + 44;
-  const h = cy + 40;
+  const h = cy + 44;
   const all = c.series.flatMap((s) => s.gainDbi);
   const top = Math.ceil(all.length ? Math.max(...all) : 0);
   const floor = top - range;
@@ -103,34 +107,36 @@ export function elevationChartSvg(c: ElevationChart): string {
     if (r <= 0) continue;
     parts.push(`<path d="${arc(r)}" class="ring"/>`);
     const [x, y] = at(0, r);
-    parts.push(`<text x="${n(x)}" y="${n(y + 13)}" class="ringlabel" text-anchor="middle">${escapeText(f.fixed(top - d, 0))}</text>`);
+    parts.push(`<text x="${n(x)}" y="${n(y + 21)}" class="ringlabel" text-anchor="middle">${escapeText(f.fixed(top - d, 0))}${d === 0 ? " dBi" : ""}</text>`);
   }
-  parts.push(`<text x="${n(cx + rMax + 6)}" y="${n(cy + 26)}" class="ringlabel" text-anchor="end">dBi</text>`);
   for (const el of [30, 60, 90, 120, 150]) {
     const [x, y] = at(el, rMax);
     parts.push(`<line x1="${n(cx)}" y1="${n(cy)}" x2="${n(x)}" y2="${n(y)}" class="spoke"/>`);
   }
-  for (const el of [0, 30, 60, 90]) {
+  for (const el of [30, 60, 90]) {
     const [x, y] = at(el, rMax + 12);
     parts.push(`<text x="${n(x)}" y="${n(y + 4)}" class="ringlabel" text-anchor="middle">${el}°</text>`);
   }
+  parts.push(`<text x="${n(cx + rMax + 4)}" y="${n(cy - 4)}" class="ringlabel">0°</text>`);
   for (const el of c.marksDeg ?? []) {
     const [x0, y0] = at(el, rMax), [x1, y1] = at(el, rMax + 5);
     parts.push(`<line x1="${n(x0)}" y1="${n(y0)}" x2="${n(x1)}" y2="${n(y1)}" class="mark" data-mark-deg="${n(el)}"/>`);
   }
   parts.push(`<line x1="6" y1="${n(cy)}" x2="${n(w - 6)}" y2="${n(cy)}" class="groundline"/>`);
   for (let x = 10; x < w - 6; x += 12) parts.push(`<line x1="${x}" y1="${n(cy)}" x2="${x - 7}" y2="${n(cy + 7)}" class="hatch"/>`);
-  parts.push(`<text x="${n(cx)}" y="${n(cy + 24)}" class="ringlabel" text-anchor="middle">ground</text>`);
-  parts.push(`<text x="8" y="${n(cy - 6)}" class="ringlabel">far side</text>`);
-  parts.push(`<text x="${n(w - 8)}" y="${n(cy - 6)}" class="ringlabel" text-anchor="end">toward the lobe</text>`);
+  parts.push(`<text x="${n(cx)}" y="${n(cy + 34)}" class="ringlabel" text-anchor="middle">ground</text>`);
+  parts.push(`<text x="8" y="${n(cy + 34)}" class="ringlabel">← far side</text>`);
+  parts.push(`<text x="${n(w - 8)}" y="${n(cy + 34)}" class="ringlabel" text-anchor="end">toward the takeoff →</text>`);
   c.series.slice(0, 3).forEach((s, k) => {
     const d = s.gainDbi.map((g, i) => { const [x, y] = at(i * s.stepDeg, radius(g)); return `${i === 0 ? "M" : "L"}${n(x)},${n(y)}`; }).join("");
-    parts.push(`<path d="${d}" class="trace s${k + 1}"><title>${escapeText(s.label)}</title></path>`);
+    parts.push(`<path d="${d}" class="trace ${s.cls ?? `s${k + 1}`}"><title>${escapeText(s.label)}</title></path>`);
   });
   if (c.takeoff) {
     const [x, y] = at(c.takeoff.elevationDeg, radius(c.takeoff.gainDbi));
     parts.push(`<circle cx="${n(x)}" cy="${n(y)}" r="4" class="takeoff"/>`);
-    parts.push(`<text x="${n(x + 7)}" y="${n(y - 6)}" class="takeofflabel">takeoff ${escapeText(f.degrees(c.takeoff.elevationDeg))}</text>`);
+    // the label sits on the zenith side of the dot, so it stays inside the chart at low takeoffs
+    const right = c.takeoff.elevationDeg > 60;
+    parts.push(`<text x="${n(x + (right ? 8 : -8))}" y="${n(y - 8)}" class="takeofflabel" text-anchor="${right ? "start" : "end"}">takeoff ${escapeText(f.degrees(c.takeoff.elevationDeg))}</text>`);
   }
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${w} ${n(h)}" width="${w}" height="${n(h)}" role="img" aria-label="${escapeText(c.title)}" class="overlay elevation">${parts.join("")}</svg>`;
 }
@@ -155,10 +161,10 @@ export function groundFigureRows(e: GroundEntry): Row[] {
   const g = e.overGround, i = e.inputs.overGround;
   const [a, b] = i.elevationWindowDeg;
   return [
-    { label: "Mounting", parts: [plain(i.mounting === "horizontal" ? "wire plane horizontal, " : "wire plane vertical, feed at the top of the mast, "), plain("feed "), shown(f.metres(g.feedHeightM), "overGround.feedHeightM"), plain(" up")] },
-    { label: "Wire height", parts: [plain("lowest "), shown(f.metres(g.lowestPointM), "overGround.lowestPointM"), plain(", highest "), shown(f.metres(g.highestPointM), "overGround.highestPointM")] },
+    { label: "Mounting", parts: [plain(i.mounting === "horizontal" ? "wire plane horizontal, " : "wire plane vertical, feed at the top of the mast, "), plain("feed "), shown(metresShort(g.feedHeightM), "overGround.feedHeightM"), plain(" up")] },
+    { label: "Wire height", parts: [plain("lowest "), shown(metresShort(g.lowestPointM), "overGround.lowestPointM"), plain(", highest "), shown(metresShort(g.highestPointM), "overGround.highestPointM")] },
     { label: "Ground", parts: [plain(`${i.groundName}`), plain(i.ground.type === "real" ? ` (relative permittivity ${f.trimZeros(f.fixed(i.ground.relativePermittivity ?? 0, 1))}, conductivity ${f.trimZeros(f.fixed(i.ground.conductivitySPerM ?? 0, 4))} S/m)` : " (perfect conductor)")] },
-    { label: "Planning window", parts: [plain(`${f.fixed(a, 0)}–${f.fixed(b, 0)}° elevation (${PURPOSE_WORDS[i.purpose]})`)] },
+    { label: "Planning window", parts: [plain(`${f.fixed(a, 0)}–${f.fixed(b, 0)}° elevation, for ${i.purpose === "long-distance" ? "long distance" : "regional near-vertical coverage"}`)] },
     { label: "Takeoff (best in the window)", parts: [shown(f.degrees(g.takeoffElevationDeg), "overGround.takeoffElevationDeg"), plain(" up at azimuth "), shown(f.degrees(g.takeoffAzimuthDeg), "overGround.takeoffAzimuthDeg"), plain(", "), shown(f.gainDbi(e.figures.gainDbi), "figures.gainDbi")] },
     { label: "Strongest in the whole sky", parts: [shown(f.gainDbi(g.peakGainDbi), "overGround.peakGainDbi"), plain(" at "), shown(f.degrees(g.peakElevationDeg), "overGround.peakElevationDeg"), plain(" elevation")] },
     { label: "Power lost in the ground", parts: g.groundLossFraction === null ? [plain("none (perfect ground)")] : [shown(f.percent(g.groundLossFraction), "overGround.groundLossFraction", "pct")] },
@@ -193,7 +199,7 @@ export interface HeightRow {
 export function heightRows(e: GroundEntry): HeightRow[] {
   const rows: HeightRow[] = e.overGround.heightCurve.map((h, k) => ({
     heightM: h.heightM,
-    height: shown(f.metres(h.heightM), `overGround.heightCurve.${k}.heightM`),
+    height: shown(metresShort(h.heightM), `overGround.heightCurve.${k}.heightM`),
     gain: shown(f.gainDbi(h.gainDbi), `overGround.heightCurve.${k}.gainDbi`),
     takeoff: shown(f.degrees(h.takeoffElevationDeg), `overGround.heightCurve.${k}.takeoffElevationDeg`),
     swr: h.swr === null ? plain("–") : shown(f.swr(h.swr), `overGround.heightCurve.${k}.swr`),
@@ -206,7 +212,7 @@ export function heightRows(e: GroundEntry): HeightRow[] {
   if (!rows.some((r) => Math.abs(r.heightM - own) < 1e-9)) {
     rows.push({
       heightM: own,
-      height: shown(f.metres(own), "inputs.overGround.heightM"),
+      height: shown(metresShort(own), "inputs.overGround.heightM"),
       gain: shown(f.gainDbi(e.figures.gainDbi), "figures.gainDbi"),
       takeoff: shown(f.degrees(e.overGround.takeoffElevationDeg), "overGround.takeoffElevationDeg"),
       swr: shown(f.swr(e.figures.swr), "figures.swr"),
@@ -309,7 +315,7 @@ export function planPoints(e: GroundEntry): PlanPoint[] {
 
 /** What holds each point up, in words. */
 export function supportWords(e: GroundEntry, p: PlanPoint): string {
-  const h = f.metres(p.heightM);
+  const h = metresShort(p.heightM);
   const vertical = e.inputs.overGround.mounting === "vertical";
   if (p.role === "feed") return vertical ? `top of the mast, ${h}: the feed point and the feed line hang here` : `centre support (mast or halyard) at ${h}: the feed point; run the feed line down square to the wire`;
   if (p.role === "end") return `end insulator at ${h}, then rope to a tie-off (tree, mast or post) at the same height or higher, pulled in line with the last piece`;
@@ -370,11 +376,11 @@ export function layoutRows(e: GroundEntry): { label: string; role: string; groun
   return planPoints(e).map((p) => ({
     label: p.role === "feed" ? "F" : `P${p.index}`,
     role: p.role === "feed" ? "feed point" : p.role === "end" ? `${p.arm} end` : `${p.arm} bend`,
-    ground: f.metres(p.groundFromFeedM),
+    ground: metresShort(p.groundFromFeedM),
     groundFt: f.feet(p.groundFromFeedM),
-    wire: f.metres(p.wireFromFeedM),
+    wire: metresShort(p.wireFromFeedM),
     wireFt: f.feet(p.wireFromFeedM),
-    height: f.metres(p.heightM),
+    height: metresShort(p.heightM),
     heightFt: f.feet(p.heightM),
     xy: `${f.fixed(p.xM, 2)}, ${f.fixed(p.yM, 2)}`,
   }));
@@ -388,22 +394,22 @@ export function layoutRows(e: GroundEntry): { label: string; role: string; groun
 export function layoutSvg(e: GroundEntry, widthPx = 640): string {
   const pts = planPoints(e);
   const vertical = e.inputs.overGround.mounting === "vertical";
-  const pad = 56;
+  const pad = 56, padTop = 74;
   const xs = pts.map((p) => p.xM), ys = pts.map((p) => p.yM);
   const minX = Math.min(...xs, 0), maxX = Math.max(...xs, 0), minY = Math.min(...ys, 0), maxY = Math.max(...ys, 0);
   const spanX = Math.max(maxX - minX, 1), spanY = Math.max(maxY - minY, 0);
   const scale = (widthPx - 2 * pad) / spanX;
-  const planH = Math.max(spanY * scale, 0) + 2 * pad;
+  const planH = Math.max(spanY * scale, 0) + pad + padTop;
   const px = (x: number) => pad + (x - minX) * scale;
-  const py = (y: number) => pad + (maxY - y) * scale;
+  const py = (y: number) => padTop + (maxY - y) * scale;
   const parts: string[] = [];
   parts.push(`<text x="${n(widthPx / 2)}" y="18" class="charttitle" text-anchor="middle">Layout plan, seen from above (to scale, not 1:1)</text>`);
   parts.push(`<path d="${pts.map((p, k) => `${k ? "L" : "M"}${n(px(p.xM))},${n(py(p.yM))}`).join("")}" class="wire"/>`);
   pts.forEach((p, k) => {
     const x = px(p.xM), y = py(p.yM);
     parts.push(`<circle cx="${n(x)}" cy="${n(y)}" r="${p.role === "feed" ? 5 : 4}" class="${p.role === "feed" ? "feedpeg" : "peg"}"/>`);
-    const label = p.role === "feed" ? `F (feed) ${f.metres(p.heightM)} up` : `P${p.index}: ${f.metres(p.groundFromFeedM)} / ${f.feet(p.groundFromFeedM)}`;
-    const sub = p.role === "feed" ? "" : `${f.metres(p.heightM)} up`;
+    const label = p.role === "feed" ? `F (feed) ${metresShort(p.heightM)} up` : `P${p.index}: ${metresShort(p.groundFromFeedM)} / ${f.feet(p.groundFromFeedM)}`;
+    const sub = p.role === "feed" ? "" : `${metresShort(p.heightM)} up`;
     const below = k % 2 === 1 || p.role === "feed";
     const anchor = x < widthPx * 0.25 ? "start" : x > widthPx * 0.75 ? "end" : "middle";
     const ty = below ? y + 18 : y - (sub ? 30 : 12);
@@ -418,7 +424,7 @@ export function layoutSvg(e: GroundEntry, widthPx = 640): string {
   let total = planH;
   if (vertical) {
     const maxH = Math.max(...pts.map((p) => p.heightM));
-    const sideH = maxH * scale + 60;
+    const sideH = maxH * scale + 70;
     const gy = planH + sideH - 26;
     const sy = (hM: number) => gy - hM * scale;
     parts.push(`<text x="${n(widthPx / 2)}" y="${n(planH + 16)}" class="charttitle" text-anchor="middle">Side view: heights above the ground</text>`);
@@ -426,7 +432,11 @@ export function layoutSvg(e: GroundEntry, widthPx = 640): string {
     const feedX = px(0);
     parts.push(`<line x1="${n(feedX)}" y1="${n(gy)}" x2="${n(feedX)}" y2="${n(sy(e.overGround.feedHeightM))}" class="mast"/>`);
     parts.push(`<path d="${pts.map((p, k) => `${k ? "L" : "M"}${n(px(p.xM))},${n(sy(p.heightM))}`).join("")}" class="wire"/>`);
-    for (const p of pts) parts.push(`<line x1="${n(px(p.xM))}" y1="${n(gy)}" x2="${n(px(p.xM))}" y2="${n(sy(p.heightM))}" class="drop"/><circle cx="${n(px(p.xM))}" cy="${n(gy)}" r="3" class="peg"/>`);
+    for (const p of pts) {
+      parts.push(`<line x1="${n(px(p.xM))}" y1="${n(gy)}" x2="${n(px(p.xM))}" y2="${n(sy(p.heightM))}" class="drop"/><circle cx="${n(px(p.xM))}" cy="${n(gy)}" r="3" class="peg"/>`);
+      const x = px(p.xM), anchor = x < widthPx * 0.25 ? "start" : x > widthPx * 0.75 ? "end" : "middle";
+      parts.push(`<text x="${n(x)}" y="${n(sy(p.heightM) - 8)}" class="ringlabel" text-anchor="${anchor}">${escapeText(p.role === "feed" ? `F ${metresShort(p.heightM)}` : `P${p.index} ${metresShort(p.heightM)}`)}</text>`);
+    }
     total = planH + sideH;
   }
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${widthPx} ${n(total)}" width="${widthPx}" height="${n(total)}" role="img" aria-label="Layout plan: pegs below each wire point with distances from the feed" class="overlay layout" data-layout-plan="${escapeText(e.id)}">` +
@@ -470,7 +480,7 @@ export function groundBandCells(e: Entry): Record<GroundColumn, { parts: Shown[]
   const none = { parts: [plain("–")], sort: -Infinity };
   if (!g) return { height: none, mounting: none, purpose: none, takeoff: none };
   return {
-    height: { parts: [shown(f.metres(g.heightM), "inputs.overGround.heightM")], sort: g.heightM },
+    height: { parts: [shown(metresShort(g.heightM), "inputs.overGround.heightM")], sort: g.heightM },
     mounting: { parts: [plain(g.mounting === "horizontal" ? "horizontal" : "vertical, feed on top")], sort: g.mounting },
     purpose: { parts: [plain(g.purpose === "long-distance" ? "long distance" : "near-vertical")], sort: g.purpose },
     takeoff: isOverGround(e) ? { parts: [shown(f.degrees(e.overGround.takeoffElevationDeg), "overGround.takeoffElevationDeg")], sort: e.overGround.takeoffElevationDeg } : none,
