@@ -96,10 +96,11 @@ export function elevationChartSvg(c: ElevationChart): string {
   parts.push(`<text x="${n(cx)}" y="16" class="charttitle" text-anchor="middle">${escapeText(c.title)}</text>`);
   if (c.windowDeg) {
     const [a, b] = c.windowDeg;
-    for (const [lo, hi] of [[a, b], [180 - b, 180 - a]] as const) {
+    // a window reaching the zenith is one wedge over it; a lower one shows on both sides
+    const wedges: [number, number][] = b >= 90 ? [[a, 180 - a]] : [[a, b], [180 - b, 180 - a]];
+    for (const [lo, hi] of wedges) {
       const [x0, y0] = at(lo, rMax), [x1, y1] = at(hi, rMax);
       parts.push(`<path d="M${n(cx)},${n(cy)}L${n(x0)},${n(y0)}A${n(rMax)},${n(rMax)} 0 0 0 ${n(x1)},${n(y1)}Z" class="window"/>`);
-      if (lo === b) break; // a window reaching the zenith from both sides is one wedge
     }
   }
   for (const d of [0, 10, 20, 30].filter((d) => d <= range)) {
