@@ -13,6 +13,7 @@ import {
   planPoints, supportPlan, type GroundEntry,
 } from "../../generator/site/overGround.js";
 import { xmlProblem } from "../render/xmlCheck.js";
+import { shapeSvg } from "../../generator/render/index.js";
 import { readEntries } from "./entries.js";
 
 export const HF_FIXTURES = join(import.meta.dirname, "../fixtures/entries-hf");
@@ -153,6 +154,16 @@ describe("elevation chart and height curve", () => {
     expect(c.height.sort).toBe(10);
     expect(c.mounting.sort).toBe("vertical");
     expect(c.takeoff.sort).toBe(vertical.overGround.takeoffElevationDeg);
+  });
+});
+
+describe("the shape drawing of a straight wire with its lobe straight up", () => {
+  it("marks the lobe as out of the page instead of an arrow of no length", () => {
+    expect(nvis.shape.pointsM.every((p) => Math.abs(p[1]) < 1e-9)).toBe(true);
+    expect(nvis.figures.peakDirection.thetaDeg).toBe(0);
+    const svg = shapeSvg(nvis, { widthPx: 800, dimensions: true });
+    expect(xmlProblem(svg)).toBeNull();
+    expect(svg).toContain('data-role="lobe-out-of-page"');
   });
 });
 
