@@ -1,7 +1,7 @@
 // The finder: a small JSON index with one record per buildable design, and the filter over it that
 // runs in the browser on every keystroke. Pure functions; the page script only wires them to the form.
 import type { Band } from "./catalog.js";
-import { isOk, type Entry } from "./ok.js";
+import { isOk, sharedBandIds, siteBandId, type Entry } from "./ok.js";
 import { paths } from "./paths.js";
 import { needsNoPartsOf, realizedGainOf } from "./feedRows.js";
 import { fitFrequency } from "./frequencyFit.js";
@@ -49,12 +49,13 @@ export interface FinderIndex {
 }
 
 export function finderIndex(bands: readonly Band[], entries: readonly Entry[]): FinderIndex {
+  const shared = sharedBandIds(entries);
   return {
     version: 1,
     bands: bands.map((b) => ({ id: b.id, name: b.name, lowHz: b.lowHz, highHz: b.highHz, note: b.note })),
     designs: entries.filter(isOk).map((e) => ({
       id: e.id,
-      band: e.inputs.bandId,
+      band: siteBandId(e, shared),
       frequencyHz: e.inputs.frequencyHz,
       gainDbi: e.figures.gainDbi,
       lengthWl: e.inputs.lengthWl,

@@ -14,7 +14,8 @@ import {
 } from "../../generator/site/overGround.js";
 import { xmlProblem } from "../render/xmlCheck.js";
 import { shapeSvg } from "../../generator/render/index.js";
-import { readEntries } from "./entries.js";
+import { readEntries, resealed } from "./entries.js";
+import { sharedBandIds, siteBandId } from "../../generator/site/ok.js";
 
 export const HF_FIXTURES = join(import.meta.dirname, "../fixtures/entries-hf");
 const hf = readEntries(HF_FIXTURES);
@@ -154,6 +155,27 @@ describe("elevation chart and height curve", () => {
     expect(c.height.sort).toBe(10);
     expect(c.mounting.sort).toBe("vertical");
     expect(c.takeoff.sort).toBe(vertical.overGround.takeoffElevationDeg);
+  });
+});
+
+describe("a band id used both in free space and over the ground", () => {
+  it("gives two site bands, the free-space one keeping its id", () => {
+    const free = readEntries().filter(isOk).find((e) => e.inputs.bandId === "10m")!;
+    expect(free).toBeDefined();
+    const hung = resealed(horizontal, (e) => { e.id = "10m-1wl-k1-max-gain-h10m-horizontal-long-distance"; e.inputs.bandId = "10m"; e.inputs.bandName = free.inputs.bandName; });
+    const all = [free, hung, vertical];
+    const shared = sharedBandIds(all);
+    expect([...shared]).toEqual(["10m"]);
+    expect(siteBandId(free, shared)).toBe("10m");
+    expect(siteBandId(hung, shared)).toBe("10m-over-ground");
+    expect(siteBandId(vertical, shared)).toBe("20m");
+    const bands = bandsOf(all);
+    expect(bands.map((b) => b.id).sort()).toEqual(["10m", "10m-over-ground", "20m"]);
+    expect(bands.find((b) => b.id === "10m-over-ground")!.name).toBe(`${free.inputs.bandName}, over the ground`);
+    expect(bands.find((b) => b.id === "10m")!.entries.map((e) => e.id)).toEqual([free.id]);
+    const index = finderIndex(bands, all.filter(isOk));
+    expect(index.designs.find((d) => d.id === hung.id)!.band).toBe("10m-over-ground");
+    expect(index.designs.find((d) => d.id === free.id)!.band).toBe("10m");
   });
 });
 
