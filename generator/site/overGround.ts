@@ -81,9 +81,10 @@ export const ELEVATION_RANGE_DB = 30;
  * the best gain rounded up at the rim. Up to three series (classes s1–s3).
  */
 export function elevationChartSvg(c: ElevationChart): string {
-  const w = c.widthPx ?? 480;
+  // drawn small (360 wide) so that on a phone it shows near 1:1 and its 12 px labels stay readable
+  const w = c.widthPx ?? 360;
   const range = c.rangeDb ?? ELEVATION_RANGE_DB;
-  const rMax = w / 2 - 40;
+  const rMax = w / 2 - 30;
   const cx = w / 2, cy = rMax + 44;
   const h = cy + 44;
   const all = c.series.flatMap((s) => s.gainDbi);
@@ -227,15 +228,15 @@ export function heightRows(e: GroundEntry): HeightRow[] {
 }
 
 /** The height curve as a small chart: gain against support height, each point labelled with its takeoff. */
-export function heightCurveSvg(e: GroundEntry, widthPx = 480): string {
+export function heightCurveSvg(e: GroundEntry, widthPx = 360): string {
   const rows = heightRows(e);
-  const h = 240, left = 48, right = 20, topPad = 34, bottom = 40;
+  const h = 230, left = 40, right = 16, topPad = 36, bottom = 40;
   const xs = rows.map((r) => r.heightM), gs = rows.map((r) => r.gainDbi);
   const x0 = Math.floor(Math.min(...xs)) - 1, x1 = Math.ceil(Math.max(...xs)) + 1;
   const g0 = Math.floor(Math.min(...gs)) - 1, g1 = Math.ceil(Math.max(...gs)) + 1;
   const X = (v: number) => left + ((v - x0) / (x1 - x0)) * (widthPx - left - right);
   const Y = (v: number) => topPad + ((g1 - v) / (g1 - g0)) * (h - topPad - bottom);
-  const parts: string[] = [`<text x="${n(widthPx / 2)}" y="16" class="charttitle" text-anchor="middle">Gain in the window against support height</text>`];
+  const parts: string[] = [`<text x="${n(widthPx / 2)}" y="16" class="charttitle" text-anchor="middle">Gain in the window by support height</text>`];
   const gStep = g1 - g0 > 8 ? 2 : 1;
   for (let g = g0; g <= g1; g += gStep) parts.push(`<line x1="${left}" y1="${n(Y(g))}" x2="${widthPx - right}" y2="${n(Y(g))}" class="ring"/><text x="${left - 6}" y="${n(Y(g) + 4)}" class="ringlabel" text-anchor="end">${escapeText(f.fixed(g, 0))}</text>`);
   const xStep = x1 - x0 > 12 ? 5 : x1 - x0 > 6 ? 2 : 1;

@@ -173,11 +173,23 @@ describe("the site over the ground", () => {
     await w.page.close();
   });
 
-  it("fits a phone: no sideways scrolling on an over-ground design page at 390 px", async () => {
-    for (const e of [target, vertical] as GroundEntry[]) {
-      const w = await open(`/designs/${e.id}/`, 390);
+  it("fits a phone: no sideways scrolling, and diagram text of 11 px or more (the site's rule) at 390 px", async () => {
+    const pages = [...([target, vertical] as GroundEntry[]).map((e) => `/designs/${e.id}/`), `/compare/?ids=${target.id},${vertical.id}`, "/bands/20m/", "/"];
+    for (const path of pages) {
+      const w = await open(path, 390);
+      if (path.startsWith("/compare")) await w.page.waitForSelector("[data-compare-out]:not([hidden])");
       const over = await w.page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
-      expect(over, e.id).toBeLessThanOrEqual(0);
+      expect(over, path).toBeLessThanOrEqual(0);
+      // the smallest text of every inline diagram as it shows on the screen
+      const sizes = await w.page.evaluate(() => [...document.querySelectorAll<SVGSVGElement>("main svg[viewBox]")].flatMap((svg) => {
+        const texts = [...svg.querySelectorAll("text")];
+        const width = svg.getBoundingClientRect().width;
+        if (!texts.length || width === 0) return [];
+        return [{ what: svg.getAttribute("class") ?? "svg", px: (Math.min(...texts.map((t) => parseFloat(getComputedStyle(t).fontSize))) * width) / svg.viewBox.baseVal.width }];
+      }));
+      if (path.startsWith("/designs/")) expect(sizes.length, path).toBeGreaterThanOrEqual(3);
+      for (const s of sizes) expect(s.px, `${path}: ${s.what}`).toBeGreaterThanOrEqual(11 - 0.05);
+      expectClean(w);
       await w.page.close();
     }
   });
