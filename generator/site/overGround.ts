@@ -138,7 +138,8 @@ export function elevationChartSvg(c: ElevationChart): string {
     parts.push(`<circle cx="${n(x)}" cy="${n(y)}" r="4" class="takeoff"/>`);
     // the label sits on the zenith side of the dot, so it stays inside the chart at low takeoffs
     const right = c.takeoff.elevationDeg > 60;
-    parts.push(`<text x="${n(x + (right ? 8 : -8))}" y="${n(y - 8)}" class="takeofflabel" text-anchor="${right ? "start" : "end"}">takeoff ${escapeText(f.degrees(c.takeoff.elevationDeg))}</text>`);
+    const high = c.takeoff.elevationDeg > 80; // below the dot, clear of the zenith's angle label
+    parts.push(`<text x="${n(x + (right ? 8 : -8))}" y="${n(high ? y + 18 : y - 8)}" class="takeofflabel" text-anchor="${right ? "start" : "end"}">takeoff ${escapeText(f.degrees(c.takeoff.elevationDeg))}</text>`);
   }
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${w} ${n(h)}" width="${w}" height="${n(h)}" role="img" aria-label="${escapeText(c.title)}" class="overlay elevation">${parts.join("")}</svg>`;
 }
@@ -242,7 +243,7 @@ export function heightCurveSvg(e: GroundEntry, widthPx = 360): string {
   const xStep = x1 - x0 > 12 ? 5 : x1 - x0 > 6 ? 2 : 1;
   for (let x = Math.ceil(x0 / xStep) * xStep; x <= x1; x += xStep) parts.push(`<line x1="${n(X(x))}" y1="${h - bottom}" x2="${n(X(x))}" y2="${h - bottom + 4}" class="spoke"/><text x="${n(X(x))}" y="${h - bottom + 16}" class="ringlabel" text-anchor="middle">${x}</text>`);
   parts.push(`<text x="${n(widthPx / 2)}" y="${h - 6}" class="ringlabel" text-anchor="middle">support height (m)</text>`);
-  parts.push(`<text x="12" y="${n(topPad - 8)}" class="ringlabel">dBi</text>`);
+  parts.push(`<text x="6" y="${n(topPad - 14)}" class="ringlabel">dBi</text>`);
   parts.push(`<line x1="${left}" y1="${h - bottom}" x2="${widthPx - right}" y2="${h - bottom}" class="groundline"/>`);
   parts.push(`<path d="${rows.map((r, k) => `${k ? "L" : "M"}${n(X(r.heightM))},${n(Y(r.gainDbi))}`).join("")}" class="trace s2"/>`);
   for (const r of rows) {
@@ -388,6 +389,31 @@ export function layoutRows(e: GroundEntry): { label: string; role: string; groun
   }));
 }
 
+interface Box { x0: number; y0: number; x1: number; y1: number }
+const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
+/** Approximate advance of a character at the layout plan's label sizes (px): wide enough to keep labels apart. */
+const CHAR_PX = 6.8;
+
+/**
+ * Greedy label placement: each block (lines of text) goes to the first of its candidate vertical
+ * offsets where it overlaps no block placed before it, its x kept inside the drawing. Returns the
+ * top-left corner of each block.
+ */
+function placeBlocks(items: { x: number; y: number; lines: string[] }[], offsets: readonly number[], widthPx: number, taken: Box[]): { x: number; y: number }[] {
+  return items.map((it) => {
+    const w = Math.max(...it.lines.map((l) => l.length)) * CHAR_PX, h = it.lines.length * 13 + 2;
+    const x0 = Math.min(Math.max(it.x - w / 2, 4), widthPx - 4 - w);
+    let best: Box | null = null;
+    for (const dy of offsets) {
+      const box = { x0, y0: it.y + dy, x1: x0 + w, y1: it.y + dy + h };
+      if (!taken.some((t) => overlaps(t, box))) { best = box; break; }
+    }
+    best ??= { x0, y0: it.y + offsets[offsets.length - 1], x1: x0 + w, y1: it.y + offsets[offsets.length - 1] + h };
+    taken.push(best);
+    return { x: best.x0, y: best.y0 };
+  });
+}
+
 /**
  * The layout plan as a drawing to scale (not 1:1): seen from above, the spot below the feed at the
  * centre, a peg below each wire point labelled with its ground distance from the feed in metres
@@ -396,54 +422,62 @@ export function layoutRows(e: GroundEntry): { label: string; role: string; groun
 export function layoutSvg(e: GroundEntry, widthPx = 640): string {
   const pts = planPoints(e);
   const vertical = e.inputs.overGround.mounting === "vertical";
-  const pad = 56, padTop = 74;
+  const pad = 56;
   const xs = pts.map((p) => p.xM), ys = pts.map((p) => p.yM);
-  const minX = Math.min(...xs, 0), maxX = Math.max(...xs, 0), minY = Math.min(...ys, 0), maxY = Math.max(...ys, 0);
-  const spanX = Math.max(maxX - minX, 1), spanY = Math.max(maxY - minY, 0);
+  const minX = Math.min(...xs, 0), maxX = Math.max(...xs, 0), maxY = Math.max(...ys, 0);
+  const spanX = Math.max(maxX - minX, 1);
   const scale = (widthPx - 2 * pad) / spanX;
-  const planH = Math.max(spanY * scale, 0) + pad + padTop;
+  // plan coordinates first (y down from the topmost peg), shifted at the end to fit every label
   const px = (x: number) => pad + (x - minX) * scale;
-  const py = (y: number) => padTop + (maxY - y) * scale;
+  const py = (y: number) => (maxY - y) * scale;
   const parts: string[] = [];
-  parts.push(`<text x="${n(widthPx / 2)}" y="18" class="charttitle" text-anchor="middle">Layout plan, seen from above (to scale, not 1:1)</text>`);
+  const taken: Box[] = pts.map((p) => ({ x0: px(p.xM) - 5, y0: py(p.yM) - 5, x1: px(p.xM) + 5, y1: py(p.yM) + 5 }));
   parts.push(`<path d="${pts.map((p, k) => `${k ? "L" : "M"}${n(px(p.xM))},${n(py(p.yM))}`).join("")}" class="wire"/>`);
-  pts.forEach((p, k) => {
-    const x = px(p.xM), y = py(p.yM);
-    parts.push(`<circle cx="${n(x)}" cy="${n(y)}" r="${p.role === "feed" ? 5 : 4}" class="${p.role === "feed" ? "feedpeg" : "peg"}"/>`);
-    const label = p.role === "feed" ? `F (feed) ${metresShort(p.heightM)} up` : `P${p.index}: ${metresShort(p.groundFromFeedM)} / ${f.feet(p.groundFromFeedM)}`;
-    const sub = p.role === "feed" ? "" : `${metresShort(p.heightM)} up`;
-    const below = k % 2 === 1 || p.role === "feed";
-    const anchor = x < widthPx * 0.25 ? "start" : x > widthPx * 0.75 ? "end" : "middle";
-    const ty = below ? y + 18 : y - (sub ? 30 : 12);
-    parts.push(`<text x="${n(x)}" y="${n(ty)}" class="peglabel" text-anchor="${anchor}">${escapeText(label)}</text>`);
-    if (sub) parts.push(`<text x="${n(x)}" y="${n(ty + 13)}" class="ringlabel" text-anchor="${anchor}">${escapeText(sub)}</text>`);
+  for (const p of pts) parts.push(`<circle cx="${n(px(p.xM))}" cy="${n(py(p.yM))}" r="${p.role === "feed" ? 5 : 4}" class="${p.role === "feed" ? "feedpeg" : "peg"}"/>`);
+  // the feed first (it anchors the plan), then outward from it
+  const order = [...pts].sort((a, b) => (a.role === "feed" ? -1 : b.role === "feed" ? 1 : a.groundFromFeedM - b.groundFromFeedM || a.index - b.index));
+  const blocks = order.map((p) => ({
+    x: px(p.xM), y: py(p.yM),
+    lines: p.role === "feed" ? [`F (feed), ${metresShort(p.heightM)} up`] : [`P${p.index}: ${metresShort(p.groundFromFeedM)} / ${f.feet(p.groundFromFeedM)}`, `${metresShort(p.heightM)} up`],
+  }));
+  const at = placeBlocks(blocks, [8, -36, 36, -64, 64, -92, 92], widthPx, taken);
+  blocks.forEach((b, k) => {
+    parts.push(`<text x="${n(at[k].x)}" y="${n(at[k].y + 11)}" class="peglabel">${escapeText(b.lines[0])}</text>`);
+    if (b.lines[1]) parts.push(`<text x="${n(at[k].x)}" y="${n(at[k].y + 24)}" class="ringlabel">${escapeText(b.lines[1])}</text>`);
   });
-  // scale bar: a round number of metres near a fifth of the width
+  // scale bar: a round number of metres near a fifth of the width, below everything drawn so far
   const target = spanX / 5;
   const bar = [1, 2, 5, 10, 20, 50].find((v) => v >= target) ?? 50;
-  const by = planH - 14;
+  const by = Math.max(...taken.map((t) => t.y1)) + 18;
   parts.push(`<line x1="${pad}" y1="${n(by)}" x2="${n(pad + bar * scale)}" y2="${n(by)}" class="scalebar"/><text x="${n(pad + bar * scale + 6)}" y="${n(by + 4)}" class="ringlabel">${bar} m (${escapeText(f.feet(bar))})</text>`);
-  let total = planH;
+  let bottom = by + 16;
   if (vertical) {
     const maxH = Math.max(...pts.map((p) => p.heightM));
-    const sideH = maxH * scale + 70;
-    const gy = planH + sideH - 26;
+    const titleY = bottom + 22;
+    const top = titleY + 40;
+    const gy = top + maxH * scale;
     const sy = (hM: number) => gy - hM * scale;
-    parts.push(`<text x="${n(widthPx / 2)}" y="${n(planH + 16)}" class="charttitle" text-anchor="middle">Side view: heights above the ground</text>`);
+    parts.push(`<text x="${n(widthPx / 2)}" y="${n(titleY)}" class="charttitle" text-anchor="middle">Side view: heights above the ground</text>`);
     parts.push(`<line x1="8" y1="${n(gy)}" x2="${widthPx - 8}" y2="${n(gy)}" class="groundline"/>`);
-    const feedX = px(0);
-    parts.push(`<line x1="${n(feedX)}" y1="${n(gy)}" x2="${n(feedX)}" y2="${n(sy(e.overGround.feedHeightM))}" class="mast"/>`);
+    parts.push(`<line x1="${n(px(0))}" y1="${n(gy)}" x2="${n(px(0))}" y2="${n(sy(e.overGround.feedHeightM))}" class="mast"/>`);
     parts.push(`<path d="${pts.map((p, k) => `${k ? "L" : "M"}${n(px(p.xM))},${n(sy(p.heightM))}`).join("")}" class="wire"/>`);
+    const side: Box[] = [{ x0: 0, y0: titleY - 14, x1: widthPx, y1: titleY + 4 }];
     for (const p of pts) {
       parts.push(`<line x1="${n(px(p.xM))}" y1="${n(gy)}" x2="${n(px(p.xM))}" y2="${n(sy(p.heightM))}" class="drop"/><circle cx="${n(px(p.xM))}" cy="${n(gy)}" r="3" class="peg"/>`);
-      const x = px(p.xM), anchor = x < widthPx * 0.25 ? "start" : x > widthPx * 0.75 ? "end" : "middle";
-      parts.push(`<text x="${n(x)}" y="${n(sy(p.heightM) - 8)}" class="ringlabel" text-anchor="${anchor}">${escapeText(p.role === "feed" ? `F ${metresShort(p.heightM)}` : `P${p.index} ${metresShort(p.heightM)}`)}</text>`);
+      side.push({ x0: px(p.xM) - 4, y0: sy(p.heightM) - 4, x1: px(p.xM) + 4, y1: sy(p.heightM) + 4 });
     }
-    total = planH + sideH;
+    const sideBlocks = order.map((p) => ({ x: px(p.xM), y: sy(p.heightM), lines: [`${p.role === "feed" ? "F" : `P${p.index}`} ${metresShort(p.heightM)}`] }));
+    const sat = placeBlocks(sideBlocks, [-22, 8, -38, 24, -54], widthPx, side);
+    sideBlocks.forEach((b, k) => parts.push(`<text x="${n(sat[k].x)}" y="${n(sat[k].y + 11)}" class="ringlabel">${escapeText(b.lines[0])}</text>`));
+    bottom = Math.max(gy, ...side.map((t) => t.y1)) + 16;
   }
+  const minTop = Math.min(0, ...taken.map((t) => t.y0));
+  const dy = 34 - minTop; // room for the title above the highest label
+  const total = bottom + dy;
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${widthPx} ${n(total)}" width="${widthPx}" height="${n(total)}" role="img" aria-label="Layout plan: pegs below each wire point with distances from the feed" class="overlay layout" data-layout-plan="${escapeText(e.id)}">` +
-    `<style>.wire{fill:none;stroke:#145c5a;stroke-width:2}.peg{fill:#fbfaf7;stroke:#24313a;stroke-width:1.5}.feedpeg{fill:#d4762a;stroke:#24313a}.peglabel{font:11px sans-serif;fill:#24313a}.ringlabel{font:10px sans-serif;fill:#56636c}.charttitle{font:600 13px sans-serif;fill:#24313a}.groundline{stroke:#5b4a32;stroke-width:1.5}.mast{stroke:#24313a;stroke-width:3}.drop{stroke:#9aa5ad;stroke-dasharray:3 3}.scalebar{stroke:#24313a;stroke-width:3}</style>` +
-    parts.join("") + `</svg>`;
+    `<style>.wire{fill:none;stroke:#145c5a;stroke-width:2}.peg{fill:#fbfaf7;stroke:#24313a;stroke-width:1.5}.feedpeg{fill:#d4762a;stroke:#24313a}.peglabel{font:11px sans-serif;fill:#24313a}.ringlabel{font:11px sans-serif;fill:#56636c}.charttitle{font:600 13px sans-serif;fill:#24313a}.groundline{stroke:#5b4a32;stroke-width:1.5}.mast{stroke:#24313a;stroke-width:3}.drop{stroke:#9aa5ad;stroke-dasharray:3 3}.scalebar{stroke:#24313a;stroke-width:3}</style>` +
+    `<text x="${n(widthPx / 2)}" y="20" class="charttitle" text-anchor="middle">Layout plan, seen from above (to scale, not 1:1)</text>` +
+    `<g transform="translate(0 ${n(dy)})">${parts.join("")}</g></svg>`;
 }
 
 /** The layout plan's file names. */
