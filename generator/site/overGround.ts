@@ -475,7 +475,7 @@ export function layoutSvg(e: GroundEntry, widthPx = 640): string {
   const dy = 34 - minTop; // room for the title above the highest label
   const total = bottom + dy;
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${widthPx} ${n(total)}" width="${widthPx}" height="${n(total)}" role="img" aria-label="Layout plan: pegs below each wire point with distances from the feed" class="overlay layout" data-layout-plan="${escapeText(e.id)}">` +
-    `<style>.wire{fill:none;stroke:#145c5a;stroke-width:2}.peg{fill:#fbfaf7;stroke:#24313a;stroke-width:1.5}.feedpeg{fill:#d4762a;stroke:#24313a}.peglabel{font:11px sans-serif;fill:#24313a}.ringlabel{font:11px sans-serif;fill:#56636c}.charttitle{font:600 13px sans-serif;fill:#24313a}.groundline{stroke:#5b4a32;stroke-width:1.5}.mast{stroke:#24313a;stroke-width:3}.drop{stroke:#9aa5ad;stroke-dasharray:3 3}.scalebar{stroke:#24313a;stroke-width:3}</style>` +
+    `<style>.wire{fill:none;stroke:#145c5a;stroke-width:2}.peg{fill:#fbfaf7;stroke:#24313a;stroke-width:1.5}.feedpeg{fill:#d4762a;stroke:#24313a}.peglabel{font:11px sans-serif;fill:#24313a}.ringlabel{font:11px sans-serif;fill:#56636c}.charttitle{font:600 13px sans-serif;fill:#24313a}.groundline{stroke:#5b4a32;stroke-width:1.5}.mast{stroke:#24313a;stroke-width:3}.drop{stroke:#9aa5ad;stroke-dasharray:3 3}.scalebar{stroke:#24313a;stroke-width:3}.peglabel,.ringlabel{paint-order:stroke;stroke:#fbfaf7;stroke-width:3px;stroke-linejoin:round}</style>` +
     `<text x="${n(widthPx / 2)}" y="20" class="charttitle" text-anchor="middle">Layout plan, seen from above (to scale, not 1:1)</text>` +
     `<g transform="translate(0 ${n(dy)})">${parts.join("")}</g></svg>`;
 }
