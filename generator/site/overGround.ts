@@ -39,9 +39,6 @@ export const metresShort = (v: number): string => `${f.trimZeros(f.fixed(v, 2))}
 const n = (v: number): string => (Math.round(v * 10) / 10).toString();
 const rad = (deg: number) => (deg * Math.PI) / 180;
 
-/** The tallest support a design needs: its highest wire point (the mast top for both mountings, or a tie-off above it). */
-export const supportHeightOf = (e: GroundEntry): number => e.overGround.highestPointM;
-
 /** One line for lists: "horizontal at 10 m · long distance (5–25°) · average ground". */
 export function groundSummary(e: GroundEntry): string {
   const g = e.inputs.overGround;
