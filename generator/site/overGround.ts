@@ -48,6 +48,16 @@ export function groundSummary(e: GroundEntry): string {
 
 // ---------------------------------------------------------------- elevation chart
 
+/**
+ * The charts' own styles, carried inside each SVG so that pages without them (every free-space
+ * design page) do not load them; they add to the site's svg.overlay rules (rings, traces, labels).
+ */
+const CHART_STYLE = "<style>svg.ground-chart{width:100%;height:auto;display:block;max-width:28rem;margin:0 auto}" +
+  "svg.ground-chart .window{fill:#efe5cf;opacity:.8}svg.ground-chart .mark{stroke:#24313a;stroke-width:1.5}" +
+  "svg.ground-chart .groundline{stroke:#5b4a32;stroke-width:1.5}svg.ground-chart .hatch{stroke:#8c7b60}" +
+  "svg.ground-chart .takeoff{fill:#d4762a;stroke:#24313a}svg.ground-chart .point{fill:#fbfaf7;stroke:#145c5a;stroke-width:1.5}" +
+  "svg.ground-chart .takeofflabel{font-size:12px;font-weight:600;fill:#24313a;paint-order:stroke;stroke:#fbfaf7;stroke-width:3px}</style>";
+
 export interface ElevationSeries {
   label: string;
   /** Gain every stepDeg from the horizon (0°) over the zenith (90°) to the far horizon (180°). */
@@ -138,7 +148,7 @@ export function elevationChartSvg(c: ElevationChart): string {
     const high = c.takeoff.elevationDeg > 80; // below the dot, clear of the zenith's angle label
     parts.push(`<text x="${n(x + (right ? 8 : -8))}" y="${n(high ? y + 18 : y - 8)}" class="takeofflabel" text-anchor="${right ? "start" : "end"}">takeoff ${escapeText(f.degrees(c.takeoff.elevationDeg))}</text>`);
   }
-  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${w} ${n(h)}" width="${w}" height="${n(h)}" role="img" aria-label="${escapeText(c.title)}" class="overlay elevation">${parts.join("")}</svg>`;
+  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${w} ${n(h)}" width="${w}" height="${n(h)}" role="img" aria-label="${escapeText(c.title)}" class="overlay elevation ground-chart">${CHART_STYLE}${parts.join("")}</svg>`;
 }
 
 /** The design page's elevation pattern: the cut through the takeoff azimuth, window and planning elevations marked. */
@@ -247,7 +257,7 @@ export function heightCurveSvg(e: GroundEntry, widthPx = 360): string {
     parts.push(`<circle cx="${n(X(r.heightM))}" cy="${n(Y(r.gainDbi))}" r="${r.current ? 5 : 3.5}" class="${r.current ? "takeoff" : "point"}"${r.current ? ' data-current=""' : ""}/>`);
     parts.push(`<text x="${n(X(r.heightM))}" y="${n(Y(r.gainDbi) - 9)}" class="ringlabel" text-anchor="middle">${escapeText(f.fixed(r.takeoffDeg, 0))}°</text>`);
   }
-  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${widthPx} ${h}" width="${widthPx}" height="${h}" role="img" aria-label="Gain in the planning window against support height; labels give the takeoff elevation" class="overlay heightcurve">${parts.join("")}</svg>`;
+  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${widthPx} ${h}" width="${widthPx}" height="${h}" role="img" aria-label="Gain in the planning window against support height; labels give the takeoff elevation" class="overlay heightcurve ground-chart">${CHART_STYLE}${parts.join("")}</svg>`;
 }
 
 export interface GroundRow { ground: string; gain: Shown; takeoff: Shown; swr: Shown; current: boolean }
@@ -472,7 +482,9 @@ export function layoutSvg(e: GroundEntry, widthPx = 640): string {
   const dy = 34 - minTop; // room for the title above the highest label
   const total = bottom + dy;
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${widthPx} ${n(total)}" width="${widthPx}" height="${n(total)}" role="img" aria-label="Layout plan: pegs below each wire point with distances from the feed" class="overlay layout" data-layout-plan="${escapeText(e.id)}">` +
-    `<style>.wire{fill:none;stroke:#145c5a;stroke-width:2}.peg{fill:#fbfaf7;stroke:#24313a;stroke-width:1.5}.feedpeg{fill:#d4762a;stroke:#24313a}.peglabel{font:11px sans-serif;fill:#24313a}.ringlabel{font:11px sans-serif;fill:#56636c}.charttitle{font:600 13px sans-serif;fill:#24313a}.groundline{stroke:#5b4a32;stroke-width:1.5}.mast{stroke:#24313a;stroke-width:3}.drop{stroke:#9aa5ad;stroke-dasharray:3 3}.scalebar{stroke:#24313a;stroke-width:3}.peglabel,.ringlabel{paint-order:stroke;stroke:#fbfaf7;stroke-width:3px;stroke-linejoin:round}</style>` +
+    `<style>.wire{fill:none;stroke:#145c5a;stroke-width:2}.peg{fill:#fbfaf7;stroke:#24313a;stroke-width:1.5}.feedpeg{fill:#d4762a;stroke:#24313a}.peglabel{font:11px sans-serif;fill:#24313a}.ringlabel{font:11px sans-serif;fill:#56636c}.charttitle{font:600 13px sans-serif;fill:#24313a}.groundline{stroke:#5b4a32;stroke-width:1.5}.mast{stroke:#24313a;stroke-width:3}.drop{stroke:#9aa5ad;stroke-dasharray:3 3}.scalebar{stroke:#24313a;stroke-width:3}.peglabel,.ringlabel{paint-order:stroke;stroke:#fbfaf7;stroke-width:3px;stroke-linejoin:round}` +
+    // on a page: full width on a screen, natural size (scrolling sideways) on a phone so labels stay readable
+    `.layout-fig svg.layout{width:100%;height:auto;display:block}@media (max-width:40rem){.layout-fig{overflow-x:auto}.layout-fig svg.layout{width:${widthPx}px;max-width:none}}</style>` +
     `<text x="${n(widthPx / 2)}" y="20" class="charttitle" text-anchor="middle">Layout plan, seen from above (to scale, not 1:1)</text>` +
     `<g transform="translate(0 ${n(dy)})">${parts.join("")}</g></svg>`;
 }

@@ -10,13 +10,16 @@ import { isOk } from "../../generator/site/ok.js";
 import { isOverGround, LAYOUT_CSV_HEADER, type GroundEntry } from "../../generator/site/overGround.js";
 import { SHOWN_UNITS, valueAt, type ShownUnit } from "../../generator/site/shown.js";
 import { CACHE, ensureSite, launchChromium, serve, watchedPage, type Browser, type PageWatch, type StaticServer } from "./harness.js";
-import { readEntries } from "./entries.js";
+import { readEntries, resealed } from "./entries.js";
 
 const HF_FIXTURES = join(import.meta.dirname, "../fixtures/entries-hf");
 const hf = readEntries(HF_FIXTURES).filter(isOverGround);
 const free = readEntries().filter(isOk).slice(0, 3);
 const target = hf.find((e) => e.id === "20m-1wl-k1-max-gain-h10m-horizontal-long-distance")!;
 const vertical = hf.find((e) => e.inputs.overGround.mounting === "vertical")!;
+/** A band id in both parts of the grid (10 m): a free-space entry, and an over-ground copy of the target under that band. */
+const free10 = readEntries().filter(isOk).find((e) => e.inputs.bandId === "10m")!;
+const ground10 = resealed(target, (e) => { e.id = "10m-1wl-k1-max-gain-h10m-horizontal-long-distance"; e.inputs.bandId = "10m"; e.inputs.bandName = free10.inputs.bandName; e.title = e.title.replace(target.inputs.bandName, free10.inputs.bandName); });
 
 let server: StaticServer, browser: Browser;
 
@@ -25,7 +28,7 @@ function fixture(): string {
   mkdirSync(dir, { recursive: true });
   const want = new Map<string, string>();
   for (const n of readdirSync(HF_FIXTURES).filter((n) => n.endsWith(".json"))) want.set(n, readFileSync(join(HF_FIXTURES, n), "utf8"));
-  for (const e of free) want.set(`${e.id}.json`, `${JSON.stringify(e)}\n`);
+  for (const e of [...free, free10, ground10]) want.set(`${e.id}.json`, `${JSON.stringify(e)}\n`);
   for (const n of readdirSync(dir)) if (!want.has(n)) rmSync(join(dir, n), { force: true });
   for (const [n, text] of want) {
     let old = "";
@@ -36,7 +39,7 @@ function fixture(): string {
 }
 
 beforeAll(async () => {
-  if (hf.length < 3 || !target || !vertical) throw new Error(`the over-ground fixtures in ${HF_FIXTURES} are incomplete`);
+  if (hf.length < 3 || !target || !vertical || !free10) throw new Error(`the over-ground fixtures in ${HF_FIXTURES} are incomplete`);
   const site = await ensureSite("hf", fixture(), "/");
   console.log(`over-ground site: ${site.built ? `built in ${site.seconds.toFixed(1)} s` : "reused"}`);
   server = await serve(site.dir, "/");
@@ -159,6 +162,21 @@ describe("the site over the ground", () => {
     expect(await band.page.locator("[data-ground-note]").count()).toBe(1);
     expectClean(band);
     await band.page.close();
+  });
+
+  it("a band id used in free space and over the ground gives two band pages", async () => {
+    const freeBand = await open("/bands/10m/");
+    expect(await freeBand.page.$$eval("tr[data-id]", (trs) => trs.map((t) => t.getAttribute("data-id")))).toEqual([free10.id]);
+    expect(await freeBand.page.locator('th[data-col="height"]').count()).toBe(0);
+    await freeBand.page.close();
+    const groundBand = await open("/bands/10m-over-ground/");
+    expect(await groundBand.page.$$eval("tr[data-id]", (trs) => trs.map((t) => t.getAttribute("data-id")))).toEqual([ground10.id]);
+    expect(await groundBand.page.locator("h1").textContent()).toBe(`${free10.inputs.bandName}, over the ground`);
+    await groundBand.page.close();
+    const page = await open(`/designs/${ground10.id}/`);
+    expect(await page.page.locator(".crumbs a").nth(1).getAttribute("href")).toBe("/bands/10m-over-ground/");
+    expectClean(page);
+    await page.page.close();
   });
 
   it("compare page overlays the elevation patterns of designs over the ground", async () => {
