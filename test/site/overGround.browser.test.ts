@@ -73,7 +73,7 @@ describe("the site over the ground", () => {
     await w.page.waitForFunction(() => new URL(location.href).searchParams.get("wire") === "30");
     const ids = await w.page.$$eval("[data-finder-results] a[data-id]", (as) => as.map((a) => a.getAttribute("data-id")!));
     expect(ids).toContain(target.id);
-    const expected = hf.filter((e) => e.overGround.highestPointM <= 10.005 && e.inputs.lengthM <= 30).map((e) => e.id).sort();
+    const expected = [...hf, ground10 as GroundEntry].filter((e) => e.overGround.highestPointM <= 10.005 && e.inputs.lengthM <= 30).map((e) => e.id).sort();
     expect([...ids].sort()).toEqual(expected);
     expect(ids.filter((id) => id.startsWith("20m-"))).toEqual([target.id]);
     // the card says how it is hung
