@@ -64,7 +64,9 @@ export function shapeSvg(entry: Entry, opts: ShapeOptions = {}): string {
   const th = figures.peakDirection.thetaDeg * RAD_PER_DEG, ph = figures.peakDirection.phiDeg * RAD_PER_DEG;
   const cosT = Math.cos(th), cx = boxW / 2, cy = boxH / 2;
   const layout = lobeLayout(shape.pointsM, fv, th, ph);
-  if (layout.outOfPlane) {
+  // a straight wire has no plane: a lobe square to the page (a flat wire's near-vertical lobe) has
+  // no part in the page to draw an arrow along, so it is drawn as out of the page too
+  if (layout.outOfPlane || Math.hypot(layout.inPlane[0], layout.inPlane[1]) < 1e-6) {
     const s: Pt = [cx, -34 * k], r = 13 * k, toward = cosT > 0, q = r * 0.6;
     const mark = toward
       ? el("circle", { cx: s[0], cy: s[1], r: 3.6 * k, fill: PALETTE.lobe })

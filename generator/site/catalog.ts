@@ -1,7 +1,7 @@
 // The catalog as the site sees it: checked entries grouped into bands, the designs of a band in
 // table order, the best few per band. Pure functions over entries; the pages only lay them out.
 import { checkEntryText } from "../catalog/store.js";
-import { isOk, type Entry, type OkEntry } from "./ok.js";
+import { isOk, sharedBandIds, siteBandId, siteBandName, type Entry, type OkEntry } from "./ok.js";
 
 export { isOk, type Entry, type OkEntry };
 
@@ -52,17 +52,19 @@ export function byGain(a: Entry, b: Entry): number {
 /** Designs grouped by band, bands in frequency order. Band facts come from the band's first entry. */
 export function bandsOf(entries: readonly Entry[]): Band[] {
   const map = new Map<string, Entry[]>();
+  const shared = sharedBandIds(entries);
   for (const e of [...entries].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))) {
-    const list = map.get(e.inputs.bandId) ?? [];
+    const key = siteBandId(e, shared);
+    const list = map.get(key) ?? [];
     list.push(e);
-    map.set(e.inputs.bandId, list);
+    map.set(key, list);
   }
   return [...map.values()]
     .map((list): Band => {
       const i = list[0].inputs;
       const sorted = [...list].sort(byGain);
       return {
-        id: i.bandId, name: i.bandName, note: i.bandNote, lowHz: i.bandLowHz, highHz: i.bandHighHz, designHz: i.frequencyHz,
+        id: siteBandId(list[0], shared), name: siteBandName(list[0], shared), note: i.bandNote, lowHz: i.bandLowHz, highHz: i.bandHighHz, designHz: i.frequencyHz,
         wireDiameterM: i.wireDiameterM, conductor: i.conductor, entries: sorted, ok: sorted.filter(isOk),
       };
     })

@@ -8,6 +8,8 @@ export interface PolarSeries {
   /** Gain every `stepDeg` from −180° to 180° − step, 0 = the main lobe. */
   valuesDbi: readonly number[];
   stepDeg: number;
+  /** Colour class; by default the series' place (s1, s2, s3). */
+  cls?: string;
 }
 
 export const SERIES_CLASSES = ["s1", "s2", "s3"] as const;
@@ -44,7 +46,7 @@ export function overlayPolarSvg(series: readonly PolarSeries[], title: string, s
       const r = radius(g);
       return `${i === 0 ? "M" : "L"}${n(cx + r * Math.sin(a))},${n(cy - r * Math.cos(a))}`;
     }).join("") + "Z";
-    return `<path d="${d}" class="trace ${SERIES_CLASSES[k]}"><title>${escapeText(s.label)}</title></path>`;
+    return `<path d="${d}" class="trace ${s.cls ?? SERIES_CLASSES[k]}"><title>${escapeText(s.label)}</title></path>`;
   }).join("");
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${sizePx} ${sizePx + 12}" role="img" aria-label="${escapeText(title)}" class="overlay">` +
     `<text x="${n(cx)}" y="16" class="charttitle" text-anchor="middle">${escapeText(title)}</text>` +
@@ -63,8 +65,28 @@ export interface CompareDesign {
   pattern: { cutStepDeg: number; cutAlongPhiDbi: number[]; cutAlongThetaDbi: number[] };
 }
 
+/** The over-ground part a compared design may carry (issue 13). */
+export interface CompareGround {
+  inputs: { overGround?: { heightM: number; mounting: "horizontal" | "vertical"; purpose: "long-distance" | "near-vertical"; groundName: string; elevationWindowDeg: [number, number] } };
+  overGround?: { takeoffElevationDeg: number; highestPointM: number; elevationCut: { azimuthDeg: number; stepDeg: number; gainDbi: number[] }; freeSpace: { gainDbi: number } } | null;
+}
+
+export interface CompareCharts {
+  /** Designs in free space, for the two polar cuts (with their place among all compared designs). */
+  polar: { design: CompareDesign; k: number }[];
+  /** Designs over the ground, for the elevation overlay. */
+  elevation: { design: CompareDesign & CompareGround; k: number }[];
+}
+
+/** Which designs go on which chart: the polar cuts for free space, the elevation pattern over the ground. */
+export function compareCharts(designs: readonly (CompareDesign & CompareGround)[]): CompareCharts {
+  const out: CompareCharts = { polar: [], elevation: [] };
+  designs.forEach((design, k) => (design.overGround && design.inputs.overGround ? out.elevation : out.polar).push({ design, k }));
+  return out;
+}
+
 /** The side-by-side table: one row per figure, one text per design. */
-export function compareRows(designs: readonly CompareDesign[]): { label: string; values: string[] }[] {
+export function compareRows(designs: readonly (CompareDesign & Partial<CompareGround>)[]): { label: string; values: string[] }[] {
   const row = (label: string, pick: (d: CompareDesign) => string) => ({ label, values: designs.map(pick) });
   const bw = (v: number | null) => (v === null ? "–" : f.degrees(v));
   return [
@@ -81,6 +103,22 @@ export function compareRows(designs: readonly CompareDesign[]): { label: string;
     row("Front-to-back", (d) => `${f.fixed(d.figures.frontToBackDb, 1)} dB`),
     row("Beamwidth along φ / θ", (d) => `${bw(d.figures.beamwidthAlongPhiDeg)} / ${bw(d.figures.beamwidthAlongThetaDeg)}`),
     row("Bending tolerance", (d) => (d.tolerance.fragile ? "sensitive" : "forgiving")),
+    ...groundCompareRows(designs),
+  ];
+}
+
+/** Rows for designs over the ground, present only when one of the compared designs is. */
+function groundCompareRows(designs: readonly (CompareDesign & CompareGround)[]): { label: string; values: string[] }[] {
+  if (!designs.some((d) => d.overGround && d.inputs.overGround)) return [];
+  const pick = (fn: (g: NonNullable<CompareGround["inputs"]["overGround"]>, o: NonNullable<CompareGround["overGround"]>) => string) =>
+    designs.map((d) => (d.overGround && d.inputs.overGround ? fn(d.inputs.overGround, d.overGround) : "free space"));
+  return [
+    { label: "Mounting and height", values: pick((g) => `${g.mounting === "horizontal" ? "horizontal" : "vertical, feed on top"} at ${f.trimZeros(f.fixed(g.heightM, 1))} m`) },
+    { label: "Highest wire point", values: pick((_, o) => f.metres(o.highestPointM)) },
+    { label: "Purpose (elevation window)", values: pick((g) => `${g.purpose === "long-distance" ? "long distance" : "near-vertical"} (${f.fixed(g.elevationWindowDeg[0], 0)}–${f.fixed(g.elevationWindowDeg[1], 0)}°)`) },
+    { label: "Takeoff elevation", values: pick((_, o) => f.degrees(o.takeoffElevationDeg)) },
+    { label: "Ground", values: pick((g) => g.groundName) },
+    { label: "Same wire in free space", values: pick((_, o) => f.gainDbi(o.freeSpace.gainDbi)) },
   ];
 }
 

@@ -5,8 +5,10 @@
 import { serialize } from "../catalog/hash.js";
 import { bendingTemplateSvgs, nodesCsv, planBendingTemplate, sha256Listing, wireDxf, type ExportShape, type PaperName } from "../export/index.js";
 import { isOk, type Entry, type OkEntry } from "./ok.js";
+import { groundShapeFileOf } from "../catalog/groundShapeFile.js";
+import { isOverGround, layoutCsv, layoutNames, layoutSvg } from "./overGround.js";
 
-export type DownloadGroup = "entry" | "shape" | "nodes" | "dxf" | "pdf-a4" | "pdf-letter" | "template-a4" | "template-letter" | "checksums";
+export type DownloadGroup = "entry" | "shape" | "layout-csv" | "layout-svg" | "nodes" | "dxf" | "pdf-a4" | "pdf-letter" | "template-a4" | "template-letter" | "checksums";
 
 /**
  * Made PDFs by file name, so the pages, the file endpoint and the checksum lists of one build make
@@ -57,6 +59,13 @@ export function shapeFileOf(entry: OkEntry) {
 
 /** The shape file's bytes, as the site offers them (and `bentwire shape <id>` prints them). */
 export const shapeFileText = (entry: OkEntry): string => `${JSON.stringify(shapeFileOf(entry), null, 2)}\n`;
+
+/**
+ * The shape file the site offers: for a design over the ground the wire as hung with the ground
+ * (groundShapeFileOf), so `bentwire analyze` reproduces the entry; else the free-space shape file.
+ */
+export const siteShapeFileText = (entry: OkEntry): string =>
+  isOverGround(entry) ? `${JSON.stringify(groundShapeFileOf(entry), null, 2)}\n` : shapeFileText(entry);
 
 /** The geometry the export writers take. */
 export function exportShapeOf(entry: OkEntry): ExportShape {
@@ -113,7 +122,7 @@ function templateFiles(entry: OkEntry, shape: ExportShape): DownloadFile[] {
 
 /** The SVG sheets of a design's templates alone (no PDF, no checksums), e.g. for its sheet maps. */
 export function templateSheets(entry: Entry): DownloadFile[] {
-  return isOk(entry) ? templateFiles(entry, exportShapeOf(entry)) : [];
+  return isOk(entry) && !isOverGround(entry) ? templateFiles(entry, exportShapeOf(entry)) : [];
 }
 
 /** One PDF per paper holding every sheet of that paper's template, made from the same SVG sheets. */
@@ -146,7 +155,15 @@ export async function downloadFiles(entry: Entry, cache: PdfCache, options: { pd
   const files: DownloadFile[] = [
     { group: "entry", name: `${entry.id}.json`, label: "catalog entry (JSON, every figure)", mediaType: "application/json", content: serialize(entry) },
   ];
-  if (isOk(entry)) {
+  if (isOverGround(entry)) {
+    // a wire metres long hung over the ground: a layout plan (pegs and distances) instead of the 1:1 template
+    const names = layoutNames(entry.id);
+    files.push(
+      { group: "shape", name: `${entry.id}.shape.json`, label: "shape file with the ground (loads into bentwire analyze)", mediaType: "application/json", content: siteShapeFileText(entry) },
+      { group: "layout-csv", name: names.csv, label: "layout plan: pegs and distances from the feed (CSV, metres and feet)", mediaType: "text/csv", content: layoutCsv(entry) },
+      { group: "layout-svg", name: names.svg, label: "layout plan drawing (SVG, to scale)", mediaType: "image/svg+xml", content: layoutSvg(entry) },
+    );
+  } else if (isOk(entry)) {
     const shape = exportShapeOf(entry);
     files.push(
       { group: "shape", name: `${entry.id}.shape.json`, label: "shape file (loads into bentwire analyze)", mediaType: "application/json", content: shapeFileText(entry) },
@@ -178,6 +195,8 @@ export async function allChecksums(entries: readonly Entry[], filePath: (id: str
 const GROUP_LABELS: Record<DownloadGroup, string> = {
   entry: "Catalog entry (JSON, every figure)",
   shape: "Shape file (loads into bentwire analyze)",
+  "layout-csv": "Layout plan: pegs and distances from the feed (CSV, metres and feet)",
+  "layout-svg": "Layout plan drawing (SVG, to scale)",
   nodes: "Node coordinates (CSV, metres and inches)",
   dxf: "Wire polyline for jig cutting (DXF, millimetres)",
   "pdf-a4": "Printable 1:1 bending template, A4 (one PDF)",

@@ -140,7 +140,7 @@ export function noOptionReason(e: Entry): string {
 /** The nearest buildable design to a cell: same band, same variant if possible, closest length then pieces. */
 export function nearestBuildable(e: Entry, all: readonly Entry[]): OkEntry | null {
   const i = e.inputs;
-  const candidates = all.filter((o): o is OkEntry => isOk(o) && o.id !== e.id && o.inputs.bandId === i.bandId);
+  const candidates = all.filter((o): o is OkEntry => isOk(o) && o.id !== e.id && o.inputs.bandId === i.bandId && (o.inputs.overGround === undefined) === (i.overGround === undefined));
   const cost = (o: OkEntry) =>
     (o.inputs.variant === i.variant ? 0 : 100) + 10 * Math.abs(o.inputs.lengthWl - i.lengthWl) + Math.abs(o.inputs.piecesPerArm - i.piecesPerArm);
   return candidates.reduce<OkEntry | null>((best, o) => (best === null || cost(o) < cost(best) || (cost(o) === cost(best) && o.id < best.id) ? o : best), null);

@@ -1,10 +1,11 @@
 // The finder: a small JSON index with one record per buildable design, and the filter over it that
 // runs in the browser on every keystroke. Pure functions; the page script only wires them to the form.
 import type { Band } from "./catalog.js";
-import { isOk, type Entry } from "./ok.js";
+import { isOk, sharedBandIds, siteBandId, type Entry } from "./ok.js";
 import { paths } from "./paths.js";
 import { needsNoPartsOf, realizedGainOf } from "./feedRows.js";
 import { fitFrequency } from "./frequencyFit.js";
+import { groundRecordOf, type GroundRecord, type Mounting, type Purpose } from "./overGround.js";
 
 export type Variant = "max-gain" | "direct-feed";
 
@@ -25,6 +26,8 @@ export interface FinderRecord {
   realizedGainDbi?: number | null;
   /** The recommended feed is a bought balun alone. */
   needsNoParts?: boolean;
+  /** Over the ground (issue 13): height, tallest support, mounting, purpose; absent in free space. */
+  ground?: GroundRecord;
   /** Base-relative page and thumbnail paths. */
   url: string;
   thumb: string;
@@ -46,12 +49,13 @@ export interface FinderIndex {
 }
 
 export function finderIndex(bands: readonly Band[], entries: readonly Entry[]): FinderIndex {
+  const shared = sharedBandIds(entries);
   return {
     version: 1,
     bands: bands.map((b) => ({ id: b.id, name: b.name, lowHz: b.lowHz, highHz: b.highHz, note: b.note })),
     designs: entries.filter(isOk).map((e) => ({
       id: e.id,
-      band: e.inputs.bandId,
+      band: siteBandId(e, shared),
       frequencyHz: e.inputs.frequencyHz,
       gainDbi: e.figures.gainDbi,
       lengthWl: e.inputs.lengthWl,
@@ -63,6 +67,7 @@ export function finderIndex(bands: readonly Band[], entries: readonly Entry[]): 
       variant: e.inputs.variant,
       realizedGainDbi: realizedGainOf(e),
       needsNoParts: needsNoPartsOf(e),
+      ...(groundRecordOf(e) ? { ground: groundRecordOf(e) } : {}),
       url: paths.design(e.id),
       thumb: paths.thumb(e.id),
     })),
@@ -86,18 +91,22 @@ export interface FinderFilters {
   sort: SortKey;
   /** true: only designs whose recommended feed needs no parts; null: all. */
   noParts?: true | null;
+  /** Tallest support at hand (m): only designs over the ground whose highest wire point it reaches. */
+  maxMastM?: number | null;
+  mounting?: Mounting | null;
+  purpose?: Purpose | null;
 }
 
 export const LENGTH_UNITS = { m: 1, ft: 0.3048 } as const;
 export type LengthUnit = keyof typeof LENGTH_UNITS;
 
 export const NO_FILTERS: FinderFilters = {
-  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, maxLength: null, lengthUnit: "m", sort: "gain", noParts: null,
+  band: null, frequencyMhz: null, minGainDbi: null, maxSpanM: null, pieces: null, variant: null, minBandwidthKhz: null, maxLength: null, lengthUnit: "m", sort: "gain", noParts: null, maxMastM: null, mounting: null, purpose: null,
 };
 
 /** Query-string names of the filters (also the form field names). */
 export const PARAM = {
-  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", maxLength: "wire", lengthUnit: "unit", sort: "sort", noParts: "noparts",
+  band: "band", frequencyMhz: "mhz", minGainDbi: "gain", maxSpanM: "span", pieces: "pieces", variant: "variant", minBandwidthKhz: "bw", maxLength: "wire", lengthUnit: "unit", sort: "sort", noParts: "noparts", maxMastM: "mast", mounting: "mounting", purpose: "purpose",
 } as const;
 
 const num = (text: string | null | undefined): number | null => {
@@ -113,6 +122,8 @@ export function parseFilters(get: (name: string) => string | null | undefined): 
   const sort = get(PARAM.sort);
   const pieces = num(get(PARAM.pieces));
   const unit = get(PARAM.lengthUnit);
+  const mounting = get(PARAM.mounting);
+  const purpose = get(PARAM.purpose);
   return {
     band,
     frequencyMhz: num(get(PARAM.frequencyMhz)),
@@ -125,6 +136,9 @@ export function parseFilters(get: (name: string) => string | null | undefined): 
     lengthUnit: unit === "ft" ? "ft" : "m",
     sort: (SORTS as readonly string[]).includes(sort ?? "") ? (sort as SortKey) : "gain",
     noParts: get(PARAM.noParts) === "1" ? true : null,
+    maxMastM: num(get(PARAM.maxMastM)),
+    mounting: mounting === "horizontal" || mounting === "vertical" ? mounting : null,
+    purpose: purpose === "long-distance" || purpose === "near-vertical" ? purpose : null,
   };
 }
 
@@ -148,6 +162,9 @@ const ORDER: Record<SortKey, (a: FinderRecord, b: FinderRecord) => number> = {
   realized: (a, b) => (b.realizedGainDbi ?? -Infinity) - (a.realizedGainDbi ?? -Infinity) || 0,
 };
 
+/** Heights are shown to 0.01 m: a wire point that high above the mast top still counts as reached. */
+export const MAST_SLACK_M = 0.005;
+
 /** The designs that pass every filter, in the chosen order (ties by id). */
 export function filterDesigns(index: FinderIndex, fl: FinderFilters): FinderRecord[] {
   const fit = fl.frequencyMhz === null ? null : new Set(fitFrequency(index.bands, fl.frequencyMhz * 1e6).bandIds);
@@ -162,6 +179,10 @@ export function filterDesigns(index: FinderIndex, fl: FinderFilters): FinderReco
     if (fl.variant !== null && d.variant !== fl.variant) return false;
     if (fl.minBandwidthKhz !== null && !(d.swr2WidthHz >= fl.minBandwidthKhz * 1e3)) return false;
     if (fl.noParts === true && !d.needsNoParts) return false;
+    // a mast height, mounting or purpose asks for designs over the ground; free-space ones have none
+    if (fl.maxMastM != null && !(d.ground && d.ground.supportHeightM <= fl.maxMastM + MAST_SLACK_M)) return false;
+    if (fl.mounting != null && d.ground?.mounting !== fl.mounting) return false;
+    if (fl.purpose != null && d.ground?.purpose !== fl.purpose) return false;
     return true;
   });
   const order = ORDER[fl.sort];

@@ -98,9 +98,12 @@ function feedCells(e: Entry): Pick<BandRow["cells"], "realized" | "noParts"> {
 
 export function keyFigures(e: OkEntry): Row[] {
   const fig = e.figures, i = e.inputs;
+  const over = i.overGround;
   const span = e.sweep.swr2Span;
   return [
-    { label: "Gain at the peak", parts: [shown(f.gainDbi(fig.gainDbi), "figures.gainDbi")] },
+    over
+      ? { label: "Gain at the takeoff", parts: [shown(f.gainDbi(fig.gainDbi), "figures.gainDbi")], note: `the best in the ${f.fixed(over.elevationWindowDeg[0], 0)}–${f.fixed(over.elevationWindowDeg[1], 0)}° elevation window, over ${over.groundName} ground` }
+      : { label: "Gain at the peak", parts: [shown(f.gainDbi(fig.gainDbi), "figures.gainDbi")] },
     { label: "Directivity", parts: [shown(f.gainDbi(fig.directivityDbi), "figures.directivityDbi")] },
     { label: "Radiation efficiency", parts: [shown(f.percent(fig.radiationEfficiency), "figures.radiationEfficiency", "pct")], note: `${i.conductor} wire, ${f.millimetres(i.wireDiameterM)} diameter` },
     {
@@ -117,7 +120,7 @@ export function keyFigures(e: OkEntry): Row[] {
       note: span?.touchesSweepEdge ? "at least: the span reaches the edge of the computed sweep" : undefined,
     },
     {
-      label: "Main lobe toward",
+      label: over ? "Takeoff direction" : "Main lobe toward",
       parts: [plain("θ "), shown(f.degrees(fig.peakDirection.thetaDeg), "figures.peakDirection.thetaDeg"), plain(", φ "), shown(f.degrees(fig.peakDirection.phiDeg), "figures.peakDirection.phiDeg")],
       note: "θ from +z, φ from +x toward +y",
     },

@@ -25,7 +25,7 @@ function mark(box: HTMLElement, kind: keyof typeof CUE_TEXT): void {
 
 export function markOverflow(root: ParentNode = document): void {
   for (const w of root.querySelectorAll<HTMLElement>(".table-wrap")) mark(w, "table");
-  for (const f of root.querySelectorAll<HTMLElement>(".figs figure, .sheet-map-scroll")) mark(f, "figure");
+  for (const f of root.querySelectorAll<HTMLElement>(".figs figure, figure[data-figure], .sheet-map-scroll")) mark(f, "figure");
 }
 
 let pending = 0;
