@@ -2,7 +2,7 @@
 // so a builder can start `analyze` (or their own edits) from a catalog design.
 import { readEntry } from "../catalog/store.js";
 import { InputError } from "../errors.js";
-import { shapeFileText } from "../site/downloads.js";
+import { siteShapeFileText } from "../site/downloads.js";
 import { isOk } from "../site/ok.js";
 
 const ID = /^[a-z0-9][a-z0-9.-]*$/;
@@ -14,7 +14,7 @@ export async function shapeText(id: string, entriesDir: string): Promise<string>
   if (!read.ok) throw new InputError(`shape: ${read.problem}`);
   const entry = read.value;
   if (!isOk(entry)) throw new InputError(`shape: entry ${id} has no shape (${entry.message})`);
-  return shapeFileText(entry);
+  return siteShapeFileText(entry); // over ground: the mounted wire with its ground, as the site offers it
 }
 
 export async function shapeCommand(id: string, opts: { entries: string }): Promise<void> {

@@ -10,7 +10,7 @@ import { describe, expect, it } from "vitest";
 import { bandCheckFrequencies, convergedSolution } from "../../generator/analysis/index.js";
 import { parseShape } from "../../generator/em/index.js";
 import { shapeText } from "../../generator/cli/shapeCommand.js";
-import { shapeFileText } from "../../generator/site/downloads.js";
+import { shapeFileText, siteShapeFileText } from "../../generator/site/downloads.js";
 
 const dir = process.env.BENTWIRE_ROUNDTRIP_ENTRIES ?? "designs/entries";
 const SAMPLE = ["10m-2wl-k1-max-gain", "2m-1.5wl-k3-max-gain", "23cm-1wl-k2-max-gain", "6m-2wl-k3-direct-feed", "70cm-2.5wl-k4-direct-feed"];
@@ -28,6 +28,17 @@ describe("shape file round trip", () => {
     const bad = cli("shape", "no-such-design", "--entries", dir);
     expect(bad.status).toBe(2);
     expect(bad.stderr.trim().split("\n")).toHaveLength(1);
+  });
+
+  it("over ground the command prints the site's download too: the mounted wire with its ground", () => {
+    const id = "20m-1wl-k1-max-gain-h10m-horizontal-long-distance";
+    const run = cli("shape", id, "--entries", "designs/entries");
+    expect(run.status).toBe(0);
+    const entry = JSON.parse(readFileSync(join("designs/entries", `${id}.json`), "utf8"));
+    expect(run.stdout).toBe(siteShapeFileText(entry));
+    const shape = parseShape(run.stdout, id);
+    expect(shape.ground).toEqual(entry.inputs.overGround.ground);
+    for (const p of shape.wires[0].pointsM) expect(p[2]).toBeCloseTo(entry.inputs.overGround.heightM, 6); // horizontal: the wire plane at the height
   });
 
   for (const id of ids) {

@@ -139,7 +139,7 @@ describe("elevation chart and height curve", () => {
     expect(own.heightM).toBe(10);
     expect(own.gainDbi).toBe(horizontal.figures.gainDbi);
     expect(rows).toHaveLength(horizontal.overGround.heightCurve.length + 1);
-    // the grid's offsets of ±3 m are on the curve (designs/grid-hf.yaml heightOffsetsM)
+    // the grid's offsets of ±3 m are on the curve (designs/grid.yaml heightOffsetsM)
     expect(heights).toEqual(expect.arrayContaining([7, 13]));
     expect(xmlProblem(heightCurveSvg(horizontal))).toBeNull();
     expect(heightCurveSvg(horizontal).match(/data-current/g)).toHaveLength(1);
