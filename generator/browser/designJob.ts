@@ -8,6 +8,9 @@
 // ground: the objective's elevation window judges gain, and the shape file offered is the one
 // `design --out` writes (the wire as mounted, with its ground), so `analyze` on it gives the result.
 import { analyzeDesign, DEFAULT_TOLERANCE, type SolveCache } from "../analysis/index.js";
+import { solveAt } from "../analysis/converged.js";
+import { groundCuts, groundFieldOf } from "../analysis/groundFigures.js";
+import { elevationChartSvg } from "../site/overGround.js";
 import { buildEntry } from "../catalog/entryBuild.js";
 import type { CellRequest, Grid } from "../catalog/grid.js";
 import { canonicalJson, roundSignificant, sha256 } from "../catalog/hash.js";
@@ -41,7 +44,11 @@ export type JobMessage =
 /** Over ground: the strongest direction within the objective's elevation window, on the analysis's converged mesh. */
 export interface Takeoff { elevationDeg: number; azimuthDeg: number; gainDbi: number; windowDeg: [number, number] }
 
-export interface Figures { shape: string; phi: string; theta: string; sweep: string; smith: string; pattern3d: string }
+export interface Figures {
+  shape: string; phi: string; theta: string; sweep: string; smith: string; pattern3d: string;
+  /** Over ground: gain against elevation through the takeoff azimuth, as the catalog page draws it. */
+  elevation?: string;
+}
 export interface Tables {
   keyFigures: ReturnType<typeof keyFigures>;
   pieces: ReturnType<typeof pieceRows>;
@@ -165,6 +172,7 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
     sweep: sweepSvg(ok),
     smith: smithSvg(ok),
     pattern3d: pattern3dSvg(ok),
+    ...(takeoff && analysed ? { elevation: elevationSvg(shapeOf(outcome.x, request), analysed.design, takeoff, result, cache) } : {}),
   };
   const tables: Tables | null = ok && {
     keyFigures: keyFigures(ok), pieces: pieceRows(ok), vertices: vertexRows(ok), match: matchRows(ok), tolerance: toleranceRows(ok), checks: checkRows(ok),
@@ -184,4 +192,22 @@ export function groundShapeFile(files: DownloadFile[], request: DesignRequest, r
     .map((f) => (f.group === "shape" ? { ...f, label: "shape file over ground (loads into bentwire analyze)", content: `${JSON.stringify(result.shape, null, 2)}\n` } : f));
   const sums = files.find((f) => f.name === CHECKSUM_FILE)!;
   return [...swapped, { ...sums, content: sha256Listing(swapped.map((f) => ({ name: f.name, content: f.content }))) }];
+}
+
+/**
+ * Over ground: the elevation cut through the takeoff azimuth (analysis/groundFigures.ts, 1° steps from
+ * the horizon over the zenith to the far horizon) on the analysis's converged mesh — the solve is
+ * already in the cache — drawn as the catalog's design page draws it (site/overGround.ts).
+ */
+function elevationSvg(shape: ReturnType<typeof shapeOf>, design: { uncertainty: { segmentsPerWavelength: number }; feedGapM: number }, t: Takeoff, r: DesignResult, cache: SolveCache): string {
+  const s = solveAt(shape, shape.frequencyHz, design.uncertainty.segmentsPerWavelength, design.feedGapM, cache, t.windowDeg);
+  const cut = groundCuts(groundFieldOf(shape, s), s.inputPowerW, t).elevationCut;
+  return elevationChartSvg({
+    series: [{ label: "Your design", gainDbi: cut.gainDbi, stepDeg: cut.stepDeg }],
+    title: `Gain against elevation, azimuth ${roundSignificant(cut.azimuthDeg, 3)}°`,
+    windowDeg: t.windowDeg,
+    marksDeg: (r.gainAtElevationDbi ?? []).map((p) => p.elevationDeg),
+    takeoff: { elevationDeg: t.elevationDeg, gainDbi: t.gainDbi },
+    standalone: true, // the page shows it as an image, out of reach of the site's stylesheet
+  });
 }

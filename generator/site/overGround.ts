@@ -58,6 +58,13 @@ const CHART_STYLE = "<style>svg.ground-chart{width:100%;height:auto;display:bloc
   "svg.ground-chart .takeoff{fill:#d4762a;stroke:#24313a}svg.ground-chart .point{fill:#fbfaf7;stroke:#145c5a;stroke-width:1.5}" +
   "svg.ground-chart .takeofflabel{font-size:12px;font-weight:600;fill:#24313a;paint-order:stroke;stroke:#fbfaf7;stroke-width:3px}</style>";
 
+/** What the site's stylesheet gives every overlay chart, for a chart shown on its own (an image). */
+const STANDALONE_STYLE = "<style>svg.ground-chart{background:#fbfaf7;font-family:Inter,system-ui,sans-serif}" +
+  "svg.ground-chart .ring{fill:none;stroke:#d3dadf}svg.ground-chart .spoke{stroke:#d3dadf;stroke-dasharray:2 3}" +
+  "svg.ground-chart .ringlabel{font-size:12px;fill:#5d6d79;paint-order:stroke;stroke:#fbfaf7;stroke-width:3px;stroke-linejoin:round}" +
+  "svg.ground-chart .charttitle{font-size:13px;font-weight:600;fill:#24313a}svg.ground-chart .trace{fill:none;stroke-width:2}" +
+  "svg.ground-chart .s1{stroke:#d4762a}svg.ground-chart .s2{stroke:#145c5a}svg.ground-chart .s3{stroke:#6b4fa0}</style>";
+
 export interface ElevationSeries {
   label: string;
   /** Gain every stepDeg from the horizon (0°) over the zenith (90°) to the far horizon (180°). */
@@ -78,6 +85,8 @@ export interface ElevationChart {
   takeoff?: { elevationDeg: number; gainDbi: number };
   rangeDb?: number;
   widthPx?: number;
+  /** Shown on its own (an <img>, a download), not inside a site page: carries the page's chart styles too. */
+  standalone?: boolean;
 }
 
 export const ELEVATION_RANGE_DB = 30;
@@ -148,7 +157,7 @@ export function elevationChartSvg(c: ElevationChart): string {
     const high = c.takeoff.elevationDeg > 80; // below the dot, clear of the zenith's angle label
     parts.push(`<text x="${n(x + (right ? 8 : -8))}" y="${n(high ? y + 18 : y - 8)}" class="takeofflabel" text-anchor="${right ? "start" : "end"}">takeoff ${escapeText(f.degrees(c.takeoff.elevationDeg))}</text>`);
   }
-  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${w} ${n(h)}" width="${w}" height="${n(h)}" role="img" aria-label="${escapeText(c.title)}" class="overlay elevation ground-chart">${CHART_STYLE}${parts.join("")}</svg>`;
+  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${w} ${n(h)}" width="${w}" height="${n(h)}" role="img" aria-label="${escapeText(c.title)}" class="overlay elevation ground-chart">${c.standalone ? STANDALONE_STYLE : ""}${CHART_STYLE}${parts.join("")}</svg>`;
 }
 
 /** The design page's elevation pattern: the cut through the takeoff azimuth, window and planning elevations marked. */

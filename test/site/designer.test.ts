@@ -282,6 +282,11 @@ describe("designer page over ground", () => {
     expect(rows.some((r) => r.startsWith("Takeoff"))).toBe(true);
     expect(rows.some((r) => r.startsWith("Ground loss") && r.includes("% of the input power"))).toBe(true);
     expect(await w.page.locator('table[data-table="elevations"] tbody tr').count()).toBe(ref.gainAtElevationDbi.length);
+    // the elevation pattern as the catalog page draws it: ground line, takeoff at the peak's elevation
+    const src = (await w.page.getAttribute('[data-figure="elevation"] img', "src"))!;
+    const svg = decodeURIComponent(src.replace(/^data:image\/svg\+xml;charset=utf-8,/, ""));
+    expect(svg).toContain('class="groundline"');
+    expect(svg).toMatch(/takeoff \d/);
     // the shape file: the wire as mounted, with its ground, the bytes `design --out` writes
     const name = (await w.page.getAttribute('[data-result] a[download$=".shape.json"]', "download"))!;
     expect(name).toBe("custom-28.5mhz-1wl-k1-max-gain-average-h10m-horizontal-peak.shape.json");

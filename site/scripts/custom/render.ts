@@ -128,6 +128,7 @@ export function renderResult(m: Done, box: HTMLElement): void {
       h("figure", {}, svgImg(m.figures.sweep, "SWR and gain across the band")),
       h("figure", {}, svgImg(m.figures.smith, "Feed-point impedance across the band on a Smith chart")),
       h("figure", {}, svgImg(m.figures.pattern3d, "Three-dimensional view of the radiation pattern")),
+      m.figures.elevation ? h("figure", { "data-figure": "elevation" }, svgImg(m.figures.elevation, "Gain against elevation through the takeoff azimuth, the ground line along the bottom, the elevation window shaded and the takeoff marked")) : null,
       h("div", { class: "panel lobe" }, h("h3", {}, "Main lobe and mounting"), h("p", {}, fig.lobe), h("p", {}, fig.mounting),
         h("p", { class: "muted small" }, m.result.ground
           ? "All figures are for the wire over the ground and at the height you gave, as mounted; a mast, guy wires and the feed line change them. The drawing and the templates show the wire flat, as you bend it."
