@@ -26,14 +26,24 @@ export function mountShape(shape: Shape, mounting: Mounting, heightM: number): S
   return { ...shape, wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map(place) })) };
 }
 
+/** A point may sit this far above the feed (rounding of a level piece), no more. */
+export const RISE_TOLERANCE_M = 1e-6;
+
 /**
  * Vertical mounting with the feed at the top of a mast H metres high; throws InputError (an
- * infeasible shape to the optimizer) when a point comes lower than `clearanceM` above the ground.
+ * infeasible shape to the optimizer) when a point comes lower than `clearanceM` above the ground,
+ * or rises above the feed (the mast top is the highest support).
  */
 export function mountVerticalAtMastTop(shape: Shape, mastHeightM: number, clearanceM: number): Shape {
-  const lowest = mastHeightM - Math.max(...shape.wires.flatMap((w) => w.pointsM.map((p) => p[1])));
+  const ys = shape.wires.flatMap((w) => w.pointsM.map((p) => p[1]));
+  const lowest = mastHeightM - Math.max(...ys);
   if (lowest < clearanceM) {
     throw new InputError(`vertical mounting: the arms come down to ${lowest.toFixed(2)} m, below the ${clearanceM} m clearance under a ${mastHeightM} m mast`);
+  }
+  // the feed is the top: a point above it would need a support taller than the mast
+  const rise = -Math.min(...ys);
+  if (rise > RISE_TOLERANCE_M) {
+    throw new InputError(`vertical mounting: a point rises ${rise.toFixed(2)} m above the feed at the top of the ${mastHeightM} m mast; the arms must run down from the feed`);
   }
   const place = ([x, y, z]: Vec3): Vec3 => [x, z, mastHeightM - y];
   return { ...shape, wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map(place) })) };

@@ -6,6 +6,7 @@ import { evaluate, shapeOf } from "../../generator/design/objective.js";
 import { parseDesignRequest } from "../../generator/design/request.js";
 import { solveShape, validateShape } from "../../generator/em/index.js";
 import { InputError } from "../../generator/errors.js";
+import { mountVerticalAtMastTop } from "../../generator/shapes/mounting.js";
 
 const C = 299_792_458; // λ = 1 m
 const request = (extra: object) =>
@@ -79,5 +80,33 @@ describe("a window gain below 0 dBi is still a design", () => {
     expect(out.evaluation.reasons).toEqual([]);
     expect(out.status).toBe("ok");
     expect(out.message).toBe("constraints met");
+  });
+});
+
+describe("vertical mounting at a mast top: the feed is the highest point", () => {
+  // The wire hangs from the top of one mast: a point above the feed would need a taller support than
+  // the mast the cell names (common practice for a single-support antenna).
+  const shapeWith = (tipY: number) => validateShape({
+    frequencyHz: C, wireRadiusM: 1e-3,
+    wires: [{ pointsM: [[-0.4, tipY, 0], [-0.2, 0.1, 0], [0, 0, 0], [0.2, 0.1, 0], [0.4, tipY, 0]] }],
+    feed: { wire: 0, vertex: 2 },
+  });
+  it("arms running down from the feed are mounted, the feed at the mast top", () => {
+    const s = mountVerticalAtMastTop(shapeWith(0.3), 5, 2);
+    const zs = s.wires[0].pointsM.map((p) => p[2]);
+    expect(Math.max(...zs)).toBeCloseTo(5, 12);
+    expect(s.wires[0].pointsM[2][2]).toBeCloseTo(5, 12);
+  });
+  it("a tip above the feed is refused with the rise in metres", () => {
+    expect(() => mountVerticalAtMastTop(shapeWith(-0.3), 5, 2)).toThrow(/rises 0\.30 m above the feed at the top of the 5 m mast/);
+  });
+  it("a design over ground at a mast top never puts wire above the feed", () => {
+    // a 20 m cell whose best shape, before this rule, had its tips 1.8 m above a 10 m mast top
+    const r = parseDesignRequest({ frequencyHz: 14.175e6, bandHz: [14e6, 14.35e6], lengthWl: 1, piecesPerArm: 2, wireDiameterM: 2e-3, conductor: "copper", seed: 1,
+      ground: { type: "real", relativePermittivity: 13, conductivitySPerM: 0.005 }, heightM: 10, mounting: "vertical", verticalClearanceM: 2, objective: "long-distance" });
+    const out = designBentArm(r);
+    expect(out.status).toBe("ok");
+    const zs = shapeOf(out.x, r).wires[0].pointsM.map((p) => p[2]);
+    expect(Math.max(...zs)).toBeLessThanOrEqual(10 + 1e-6);
   });
 });
