@@ -11,6 +11,7 @@ import { swr as swrOf } from "../analysis/swr.js";
 import { bandImpedances } from "../em/frequencyInterpolation.js";
 import { solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
+import { MountingError } from "../shapes/mounting.js";
 import { toShape, unpack, type BentArmSpec } from "../shapes/bentArm.js";
 import { constraintViolation } from "../shapes/constraints.js";
 import { wavelengthM } from "../units.js";
@@ -72,6 +73,8 @@ export function evaluate(x: readonly number[], r: DesignRequest, swrFrequenciesH
     }
     return { score: -gainDbi, gainDbi, maxSwr, reasons: [] };
   } catch (err) {
+    // a mounting shortfall grows with its size (in wavelengths), so the search can walk back from it
+    if (err instanceof MountingError) return { score: GEOMETRY_PENALTY + 1 + err.shortfallM / wavelengthM(r.frequencyHz), gainDbi: null, maxSwr: null, reasons: [err.message] };
     if (err instanceof InputError) return { score: GEOMETRY_PENALTY + 1, gainDbi: null, maxSwr: null, reasons: [err.message] };
     throw err;
   }

@@ -7,6 +7,7 @@
 // gain 4πU/P_in, the peak within the objective's elevation window).
 import { solveFeed, solveShape, type Shape } from "../em/index.js";
 import { InputError } from "../errors.js";
+import { MountingError } from "../shapes/mounting.js";
 import { offCentreShape, unpackOffCentre, type OffCentreSpec } from "../shapes/offCentre.js";
 import { offCentreViolation } from "../shapes/offCentreConstraints.js";
 import { wavelengthM } from "../units.js";
@@ -45,6 +46,8 @@ export function evaluateOffCentre(x: readonly number[], r: DesignRequest, swrFre
     }
     return { score: -gainDbi, gainDbi, maxSwr, reasons: [] };
   } catch (err) {
+    // a mounting shortfall grows with its size (in wavelengths), so the search can walk back from it
+    if (err instanceof MountingError) return { score: GEOMETRY_PENALTY + 1 + err.shortfallM / wavelengthM(r.frequencyHz), gainDbi: null, maxSwr: null, reasons: [err.message] };
     if (err instanceof InputError) return { score: GEOMETRY_PENALTY + 1, gainDbi: null, maxSwr: null, reasons: [err.message] };
     throw err;
   }

@@ -10,6 +10,17 @@
 import type { Shape, Vec3 } from "../em/index.js";
 import { InputError } from "../errors.js";
 
+/**
+ * A shape the mounting cannot hang (a point under the clearance or above the feed), with by how much
+ * (metres), so the optimizer's penalty grows with the shortfall and the search can walk back.
+ */
+export class MountingError extends InputError {
+  constructor(message: string, readonly shortfallM: number) {
+    super(message);
+    this.name = "MountingError";
+  }
+}
+
 export const MOUNTINGS = ["horizontal", "vertical"] as const;
 export type Mounting = (typeof MOUNTINGS)[number];
 
@@ -38,12 +49,12 @@ export function mountVerticalAtMastTop(shape: Shape, mastHeightM: number, cleara
   const ys = shape.wires.flatMap((w) => w.pointsM.map((p) => p[1]));
   const lowest = mastHeightM - Math.max(...ys);
   if (lowest < clearanceM) {
-    throw new InputError(`vertical mounting: the arms come down to ${lowest.toFixed(2)} m, below the ${clearanceM} m clearance under a ${mastHeightM} m mast`);
+    throw new MountingError(`vertical mounting: the arms come down to ${lowest.toFixed(2)} m, below the ${clearanceM} m clearance under a ${mastHeightM} m mast`, clearanceM - lowest + Math.max(0, -Math.min(...ys)));
   }
   // the feed is the top: a point above it would need a support taller than the mast
   const rise = -Math.min(...ys);
   if (rise > RISE_TOLERANCE_M) {
-    throw new InputError(`vertical mounting: a point rises ${rise.toFixed(2)} m above the feed at the top of the ${mastHeightM} m mast; the arms must run down from the feed`);
+    throw new MountingError(`vertical mounting: a point rises ${rise.toFixed(2)} m above the feed at the top of the ${mastHeightM} m mast; the arms must run down from the feed`, rise);
   }
   const place = ([x, y, z]: Vec3): Vec3 => [x, z, mastHeightM - y];
   return { ...shape, wires: shape.wires.map((w) => ({ ...w, pointsM: w.pointsM.map(place) })) };
