@@ -14,10 +14,12 @@ import { parseShown, shownDecimals } from "../../generator/site/format.js";
 import { isOk, type Entry, type OkEntry } from "../../generator/site/ok.js";
 import { SHOWN_UNITS, valueAt, type ShownUnit } from "../../generator/site/shown.js";
 import { CACHE, ensureSite, launchChromium, serve, watchedPage, type Browser, type PageWatch, type SiteBuild, type StaticServer } from "./harness.js";
-import { ENTRIES_DIR, HOSTILE, hostileEntry, readEntries } from "./entries.js";
+import { HOSTILE, hostileEntry, readEntries, siteTestEntriesDir } from "./entries.js";
 
 const SUB = "/club/atlas/";
-const entries = readEntries();
+// the site these tests open is built from the free-space part of the catalog (entries.ts)
+const ENTRIES_DIR = siteTestEntriesDir();
+const entries = readEntries(ENTRIES_DIR);
 const okEntries = entries.filter(isOk);
 const bands = bandsOf(entries);
 

@@ -1,6 +1,6 @@
 // Catalog entries for the site tests, read straight from designs/entries (getCollection does not
 // run inside vitest) and checked the same way the site checks them.
-import { readdirSync, readFileSync } from "node:fs";
+import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join, resolve } from "node:path";
 import { checkSiteEntry } from "../../generator/site/catalog.js";
 import { isOk, type Entry, type OkEntry } from "../../generator/site/ok.js";
@@ -8,6 +8,31 @@ import { sealEntry } from "../../generator/catalog/entryBuild.js";
 
 /** designs/entries, or the folder BENTWIRE_ENTRIES names (as for the site build). */
 export const ENTRIES_DIR = process.env.BENTWIRE_ENTRIES ? resolve(process.env.BENTWIRE_ENTRIES) : join(import.meta.dirname, "../../designs/entries");
+
+/**
+ * The entries folder the browser tests build "main" from: BENTWIRE_ENTRIES when set, else a copy of
+ * the free-space part of designs/entries in the test cache (these tests pick entries that have
+ * templates, polar cuts and a scale calculator; pages over the ground are tested on their own
+ * fixtures in overGround.browser.test.ts), rewritten only when it differs (the build's fingerprint
+ * covers the folder's contents). The whole catalog's site takes about half an hour to build here.
+ */
+export function siteTestEntriesDir(): string {
+  if (process.env.BENTWIRE_ENTRIES) return ENTRIES_DIR;
+  const dir = join(import.meta.dirname, "../../node_modules/.cache/bentwire-site-tests/site-test-entries");
+  mkdirSync(dir, { recursive: true });
+  const wanted = new Map<string, string>();
+  for (const name of readdirSync(ENTRIES_DIR).filter((n) => n.endsWith(".json")).sort()) {
+    const text = readFileSync(join(ENTRIES_DIR, name), "utf8");
+    if ((JSON.parse(text) as { inputs: { overGround?: unknown } }).inputs.overGround === undefined) wanted.set(name, text);
+  }
+  for (const name of readdirSync(dir)) if (!wanted.has(name)) rmSync(join(dir, name), { recursive: true, force: true });
+  for (const [name, text] of wanted) {
+    let old = "";
+    try { old = readFileSync(join(dir, name), "utf8"); } catch { /* new */ }
+    if (old !== text) writeFileSync(join(dir, name), text);
+  }
+  return dir;
+}
 
 export function readEntries(dir = ENTRIES_DIR): Entry[] {
   return readdirSync(dir)
