@@ -12,6 +12,9 @@ export type FigureFile = PlotFile;
 /** Pixel width the page shows the shape at (the SVG scales; this sets its label sizes). */
 export const SHAPE_WIDTH_PX = 800;
 export const PATTERN_3D_RASTER_PX = 600;
+/** WebP quality of the 3D view's raster: a smooth shaded surface, so 60 shows no loss a reader sees and
+ * keeps a design page under its 200 KiB budget (80 took the largest free-space page to 204.7 KiB). */
+export const PATTERN_3D_WEBP_QUALITY = 60;
 
 function plotSvg(entry: OkEntry, file: (typeof PLOTS)[number]): string {
   switch (file) {
@@ -28,7 +31,7 @@ export async function renderFigure(entry: OkEntry, file: FigureFile): Promise<{ 
   if (file === "thumb.png") return { body: new Uint8Array(await thumbnailPng(entry, 160)), mediaType: "image/png" };
   if (file === "card.png") return { body: new Uint8Array(await shareCardPng(entry)), mediaType: "image/png" };
   if (file === "pattern-3d.webp") {
-    const webp = await sharp(Buffer.from(pattern3dSvg(entry)), { density: 96 }).resize({ width: PATTERN_3D_RASTER_PX }).webp({ quality: 80 }).toBuffer();
+    const webp = await sharp(Buffer.from(pattern3dSvg(entry)), { density: 96 }).resize({ width: PATTERN_3D_RASTER_PX }).webp({ quality: PATTERN_3D_WEBP_QUALITY }).toBuffer();
     return { body: new Uint8Array(webp), mediaType: "image/webp" };
   }
   return { body: plotSvg(entry, file), mediaType: "image/svg+xml" };
