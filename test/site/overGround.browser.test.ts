@@ -14,11 +14,13 @@ import { readEntries, resealed } from "./entries.js";
 
 const HF_FIXTURES = join(import.meta.dirname, "../fixtures/entries-hf");
 const hf = readEntries(HF_FIXTURES).filter(isOverGround);
-const free = readEntries().filter(isOk).slice(0, 3);
+// free-space entries of the committed catalog (it holds entries over the ground too)
+const freeSpace = readEntries().filter(isOk).filter((e) => e.inputs.overGround === undefined);
+const free = freeSpace.slice(0, 3);
 const target = hf.find((e) => e.id === "20m-1wl-k1-max-gain-h10m-horizontal-long-distance")!;
 const vertical = hf.find((e) => e.inputs.overGround.mounting === "vertical")!;
 /** A band id in both parts of the grid (10 m): a free-space entry, and an over-ground copy of the target under that band. */
-const free10 = readEntries().filter(isOk).find((e) => e.inputs.bandId === "10m")!;
+const free10 = freeSpace.find((e) => e.inputs.bandId === "10m")!;
 const ground10 = resealed(target, (e) => { e.id = "10m-1wl-k1-max-gain-h10m-horizontal-long-distance"; e.inputs.bandId = "10m"; e.inputs.bandName = free10.inputs.bandName; e.title = e.title.replace(target.inputs.bandName, free10.inputs.bandName); });
 
 let server: StaticServer, browser: Browser;
