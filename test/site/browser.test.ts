@@ -10,11 +10,10 @@ import { checkEntryText } from "../../generator/catalog/store.js";
 import { parseShape } from "../../generator/em/shapeFile.js";
 import { sha256Hex } from "../../generator/export/index.js";
 import { bandsOf } from "../../generator/site/catalog.js";
-import { parseShown, shownDecimals } from "../../generator/site/format.js";
 import { isOk, type Entry, type OkEntry } from "../../generator/site/ok.js";
-import { SHOWN_UNITS, valueAt, type ShownUnit } from "../../generator/site/shown.js";
 import { CACHE, ensureSite, launchChromium, serve, watchedPage, type Browser, type PageWatch, type SiteBuild, type StaticServer } from "./harness.js";
 import { HOSTILE, hostileEntry, readEntries, siteTestEntriesDir } from "./entries.js";
+import { expectShownEqualsEntry } from "./shownCheck.js";
 
 const SUB = "/club/atlas/";
 // the site these tests open is built from the free-space part of the catalog (entries.ts)
@@ -177,15 +176,7 @@ describe("site at the root", () => {
     for (const t of ["figures", "pieces", "vertices", "tolerance", "downloads"]) expect(await w.page.locator(`table[data-table="${t}"]`).count(), t).toBe(1);
     const rows = await w.page.locator('table[data-table="vertices"] tbody tr').count();
     expect(rows).toBe(design.shape.pointsM.length);
-    const shown = await w.page.$$eval("[data-field]", (els) => els.map((e) => ({ field: e.getAttribute("data-field")!, unit: e.getAttribute("data-unit")!, text: e.textContent ?? "" })));
-    expect(shown.length).toBeGreaterThan(40);
-    for (const s of shown) {
-      const value = valueAt(design, s.field) as number;
-      expect(typeof value, s.field).toBe("number");
-      const scaled = value * SHOWN_UNITS[s.unit as ShownUnit];
-      const tol = 0.5 * 10 ** -shownDecimals(s.text) + 1e-9 * Math.abs(scaled);
-      expect(Math.abs(parseShown(s.text) - scaled), `${s.field} shown as "${s.text}"`).toBeLessThanOrEqual(tol);
-    }
+    expect(await expectShownEqualsEntry(w.page, "html", design)).toBeGreaterThan(40);
     const bytes = await w.bytes();
     console.log(`design page: ${(bytes / 1024).toFixed(1)} KiB transferred without downloads (${w.requests.length} requests)`);
     expect(bytes).toBeLessThan(200 * 1024);

@@ -5,12 +5,11 @@ import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "nod
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { parseShape } from "../../generator/em/shapeFile.js";
-import { parseShown, shownDecimals } from "../../generator/site/format.js";
 import { isOk } from "../../generator/site/ok.js";
 import { isOverGround, LAYOUT_CSV_HEADER, type GroundEntry } from "../../generator/site/overGround.js";
-import { SHOWN_UNITS, valueAt, type ShownUnit } from "../../generator/site/shown.js";
 import { CACHE, ensureSite, launchChromium, serve, watchedPage, type Browser, type PageWatch, type StaticServer } from "./harness.js";
 import { readEntries, resealed } from "./entries.js";
+import { expectShownEqualsEntry } from "./shownCheck.js";
 
 const HF_FIXTURES = join(import.meta.dirname, "../fixtures/entries-hf");
 const hf = readEntries(HF_FIXTURES).filter(isOverGround);
@@ -107,15 +106,7 @@ describe("the site over the ground", () => {
     expect(await w.page.locator("a[data-download][href*='template']").count()).toBe(0);
     expect(await w.page.locator("[data-scale]").count()).toBe(0);
     // every number shown in the over-ground part matches its entry field within the shown precision
-    const shown = await w.page.$$eval('[data-section="over-ground"] [data-field]', (els) => els.map((e) => ({ field: e.getAttribute("data-field")!, unit: e.getAttribute("data-unit")!, text: e.textContent ?? "" })));
-    expect(shown.length).toBeGreaterThan(30);
-    for (const s of shown) {
-      const value = valueAt(target, s.field) as number;
-      expect(typeof value, s.field).toBe("number");
-      const scaled = value * SHOWN_UNITS[s.unit as ShownUnit];
-      const tol = 0.5 * 10 ** -shownDecimals(s.text) + 1e-9 * Math.abs(scaled);
-      expect(Math.abs(parseShown(s.text) - scaled), `${s.field} shown as "${s.text}"`).toBeLessThanOrEqual(tol);
-    }
+    expect(await expectShownEqualsEntry(w.page, '[data-section="over-ground"]', target)).toBeGreaterThan(30);
     expectClean(w);
     await w.page.close();
   });
