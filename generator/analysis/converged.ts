@@ -1,11 +1,14 @@
 // Converged figures by adaptive mesh refinement. Starting at the shape's segments per wavelength
-// (25 by default), the mesh is doubled until one doubling changes the peak gain by less than
-// GAIN_TOLERANCE_DB and the input impedance by less than IMPEDANCE_TOLERANCE, relative:
+// (25 by default), the mesh is doubled until two doublings in a row each change the peak gain by
+// less than GAIN_TOLERANCE_DB and the input impedance by less than IMPEDANCE_TOLERANCE, relative:
 //   |G_2n − G_n| < 0.01 dB   and   |Z_2n − Z_n| / |Z_2n| < 1 %,
 // at every check frequency together (the design frequency and the band edges), or until the next
 // doubling would pass the cap: MAX_SEGMENTS_PER_WAVELENGTH, or segments shorter than 4 wire radii
-// (the thin-wire limit of em/geometryChecks.ts). The finest mesh's figures are published and the
-// last change is their stated uncertainty ("converged" says whether it met both thresholds).
+// (the thin-wire limit of em/geometryChecks.ts). One small change alone can be a coincidence (the
+// error of a coarse mesh changing sign as it shrinks): three meshes that agree pairwise are the
+// usual guard against it. The finest mesh's figures are published and the last change is their
+// stated uncertainty ("converged" says whether the last change met both thresholds; below the cap
+// the one before it met them too).
 // A sequence of successive refinements as a convergence check: Gibson, The Method of Moments in
 // Electromagnetics, 2nd ed., ch. 4. Solutions are kept in a cache the caller passes in (a Map), so
 // the band sweep reuses the solves of the ladder at the same frequency and mesh.
@@ -109,20 +112,30 @@ export function refineMesh(shape: Shape, options: RefineOptions, cache: SolveCac
   const start = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
   const cap = refinementCap(shape, start);
   let coarse = start;
-  let change: MeshChange;
+  let previousSmall = false;
   for (;;) {
     const fine = 2 * coarse;
-    change = { gainDb: 0, impedanceFraction: 0, impedanceOhm: 0 };
-    for (const f of freqs) {
-      const c = meshChange(solveAt(shape, f, coarse, feedGapM, cache, w), solveAt(shape, f, fine, feedGapM, cache, w));
-      if (Math.abs(c.gainDb) > Math.abs(change.gainDb)) change.gainDb = c.gainDb;
-      if (c.impedanceFraction > change.impedanceFraction) change = { ...change, impedanceFraction: c.impedanceFraction, impedanceOhm: c.impedanceOhm };
+    const change = largestChange(shape, freqs, coarse, fine, feedGapM, cache, w);
+    const small = withinTolerance(change);
+    const atCap = fine >= cap;
+    // at the cap there is no further doubling to confirm with: the last change is the verdict
+    if ((small && previousSmall) || atCap) {
+      return { segmentsPerWavelength: fine, comparedWithSegmentsPerWavelength: coarse, feedGapM, change, converged: small, solves: cache.size - before };
     }
-    if (withinTolerance(change) || fine >= cap) {
-      return { segmentsPerWavelength: fine, comparedWithSegmentsPerWavelength: coarse, feedGapM, change, converged: withinTolerance(change), solves: cache.size - before };
-    }
+    previousSmall = small;
     coarse = fine;
   }
+}
+
+/** The largest gain and impedance changes from `coarse` to `fine` over the check frequencies. */
+function largestChange(shape: Shape, freqs: number[], coarse: number, fine: number, feedGapM: number, cache: SolveCache, w?: [number, number]): MeshChange {
+  const change: MeshChange = { gainDb: 0, impedanceFraction: 0, impedanceOhm: 0 };
+  for (const f of freqs) {
+    const c = meshChange(solveAt(shape, f, coarse, feedGapM, cache, w), solveAt(shape, f, fine, feedGapM, cache, w));
+    if (Math.abs(c.gainDb) > Math.abs(change.gainDb)) change.gainDb = c.gainDb;
+    if (c.impedanceFraction > change.impedanceFraction) Object.assign(change, { impedanceFraction: c.impedanceFraction, impedanceOhm: c.impedanceOhm });
+  }
+  return change;
 }
 
 /** The published solution at the design frequency and how it was reached (for `analyze` alone). */

@@ -2,7 +2,8 @@
 // variant) is searched once in wavelength units (λ = 1 m, reference radius, perfect conductor,
 // reference relative bandwidth) and every band only polishes that shape with its own wire, conductor
 // and band (Nelder–Mead). If the polished shape misses a constraint that the reference met (a
-// direct-feed band wider than the reference one, say), that band gets a full search of its own; if
+// direct-feed band wider than the reference one, say), that band gets a full search of its own, and so
+// does a most-gain band whose polish ends over POLISH_SHORTFALL_DB under the reference's gain; if
 // the reference met none either (a centre-fed 1 λ or 2 λ wire sits at a current minimum, kilohms,
 // far from 50 Ω), the entry says so without a search, and when that shape's SWR in the band is also
 // above DOOMED_POLISH_SWR_FACTOR × the limit it is not even polished (the entry's optimizer record
@@ -21,7 +22,7 @@ import type { Entry } from "./entrySchema.js";
 import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
-import { GENERATOR_VERSION } from "./versions.js";
+import { GENERATOR_VERSION, SEARCH_VERSION } from "./versions.js";
 import { computeOffCentreReference, designCentreFed, firstHoldingAsBuilt, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
@@ -71,7 +72,7 @@ export function referenceHash(grid: Grid, k: ReferenceKey): string {
   return sha256(canonicalJson({
     request: referenceRequest(grid, k),
     previous: prev ? referenceHash(grid, prev) : null,
-    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
+    versions: { solver: SOLVER_VERSION, generator: SEARCH_VERSION },
   }));
 }
 
@@ -121,6 +122,17 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
   }));
 }
 
+/**
+ * A most-gain polish that ends more than this under the reference's own gain (lossless, reference
+ * wire, in wavelength units) gets a search of its band. Conductor loss and a thicker wire cost
+ * tenths of a dB on the catalog's bands; more than 1 dB is a polish stuck in a worse optimum
+ * (2.4ghz-1wl-k4-max-gain ended 2.10 dB under its reference and 1.76 dB under its K = 3 sibling).
+ */
+export const POLISH_SHORTFALL_DB = 1;
+
+const polishFellShort = (o: DesignOutcome, reference: ReferenceResult): boolean =>
+  o.evaluation.gainDbi !== null && reference.gainDbi !== null && o.evaluation.gainDbi < reference.gainDbi - POLISH_SHORTFALL_DB;
+
 /** A reference that met no constraint is not polished when its band SWR exceeds this × the limit. */
 export const DOOMED_POLISH_SWR_FACTOR = 2;
 
@@ -150,6 +162,15 @@ function designCell(grid: Grid, request: DesignRequest, reference: ReferenceResu
     // the band asks more than the reference did (a wider band, a thicker wire): search it afresh
     outcome = designCentreFed(request, reference.x, true, undefined, margin);
     startedFrom = "search";
+  }
+  if (request.variant === "max-gain" && outcome.status === "ok" && polishFellShort(outcome, reference)) {
+    // the polish ended far under the reference's gain (a thicker wire or a loss that moves the
+    // optimum): a search of the band's own, the reference shape competing as a start
+    const fresh = designCentreFed(request, reference.x, true, undefined, margin);
+    if (fresh.status === "ok" && fresh.evaluation.gainDbi! > outcome.evaluation.gainDbi!) {
+      outcome = { ...fresh, evaluations: outcome.evaluations + fresh.evaluations };
+      startedFrom = "search";
+    }
   }
   if (outcome.status !== "ok") {
     outcome = { ...outcome, message: infeasibleMessage(outcome, request, reference.status !== "ok", grid.reference.relativeBandwidth) };

@@ -1,3 +1,8 @@
-// Version of the catalog generator, part of every entry's input hash: bump it when a change to the
-// optimizer, analysis or entry layout should make existing entries stale.
-export const GENERATOR_VERSION = "bentwire-catalog-4";
+// Versions that are part of the input hashes. SEARCH_VERSION covers the wavelength-unit reference
+// searches (compute.ts referenceHash): bump it when a change to the optimizer or the objective should
+// make the committed references stale. GENERATOR_VERSION covers every entry (its reference hash
+// included): bump it when a change to the band polish, the analysis or the entry layout should make
+// existing entries stale; the references are then reused, so an analysis change recomputes entries
+// only. (The search version keeps the name the references were first hashed under.)
+export const SEARCH_VERSION = "bentwire-catalog-4";
+export const GENERATOR_VERSION = "bentwire-catalog-5";

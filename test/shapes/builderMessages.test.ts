@@ -67,7 +67,31 @@ describe("mesh check messages and rule", () => {
   it("a wire that folds back onto itself is still refused", () => {
     // out along +x, a 50 mm piece turning back, then back along the first pieces 0.4–0.8 mm away
     const hairpin = { ...base, wireRadiusM: 0.0005, wires: [{ pointsM: [[-0.3, 0, 0], [0, 0, 0], [0.3, 0, 0], [0.35, 0.0004, 0], [-0.2, 0.0008, 0]] }] };
-    expect(refusal(hairpin)).toMatch(/^shape: wires\[0\] piece \d .* and wires\[0\] piece \d .* touch or cross/);
+    // the turn at pointsM[3] is the fold (0.4 mm over 50 mm, then back along pieces 0–1)
+    expect(refusal(hairpin)).toMatch(/^shape: the bend at wires\[0\] pointsM\[3\] .* folds the wire back on itself/);
+    // and without that fold (the return leg starting 3 mm off), the crossing of non-adjacent pieces
+    const apart = { ...hairpin, wires: [{ pointsM: [[-0.3, 0, 0], [0, 0, 0], [0.3, 0, 0], [0.35, 0.003, 0], [-0.2, 0.0008, 0]] }] };
+    expect(refusal(apart)).toMatch(/^shape: wires\[0\] piece [01] .* and wires\[0\] piece 3 .* touch or cross/);
+  });
+  // two straight pieces from one bend are d·sin α apart at run d from it (plane geometry)
+  it("a sharp bend is not a crossing at any mesh: 20° between two 0.3 m pieces, 1 mm wire, up to 400 per λ", () => {
+    const a = (20 * Math.PI) / 180;
+    const sharp = { ...base, wireRadiusM: 0.0005, wires: [{ pointsM: [[-0.3, 0, 0], [0, 0, 0], [0.3, 0, 0], [0.3 - 0.3 * Math.cos(a), 0.3 * Math.sin(a), 0]] }] };
+    for (const spw of [25, 50, 100, 200, 400]) {
+      const warnings = checkMesh(buildMesh(validateShape({ ...sharp, segmentsPerWavelength: spw })));
+      // within 4 radii (2 mm) for 2 mm / sin 20° = 5.85 mm from the bend
+      expect(warnings).toEqual([
+        "the bend at wires[0] pointsM[2] (between wires[0] piece 1 (pointsM[1] to pointsM[2]) and piece 2): the pieces meet at 20.0°, under 30°, and lie within 4 wire radii of each other for 5.848 mm from the bend; the thin-wire model loses accuracy there",
+      ]);
+    }
+  });
+  it("a bend that folds the wire back along the piece before it is refused", () => {
+    // 0.5° between a 0.3 m piece and a 0.2 m one: within 1 mm for 1 mm / sin 0.5° = 114.6 mm, over half of 0.2 m
+    const a = (0.5 * Math.PI) / 180;
+    const fold = { ...base, wireRadiusM: 0.0005, wires: [{ pointsM: [[-0.3, 0, 0], [0, 0, 0], [0.3, 0, 0], [0.3 - 0.2 * Math.cos(a), 0.2 * Math.sin(a), 0]] }] };
+    expect(refusal(fold)).toBe(
+      "shape: the bend at wires[0] pointsM[2] (between wires[0] piece 1 (pointsM[1] to pointsM[2]) and piece 2) folds the wire back on itself: the pieces meet at 0.5° and lie within the two wire radii (1.000 mm) of each other for 114.6 mm from the bend, more than half the shorter piece (200.0 mm); open the bend",
+    );
   });
 });
 
