@@ -23,7 +23,7 @@ export interface ValidationRow {
 export function validationRows(checks: readonly ReferenceCheck[]): ValidationRow[] {
   return checks.map((c) => {
     const d = checkDecimals(c);
-    const unit = c.unit === "°" ? "°" : ` ${c.unit}`;
+    const unit = c.unit === "°" || c.unit === "" ? c.unit : ` ${c.unit}`; // "" for a ratio such as |Γ|
     return {
       id: c.id,
       quantity: c.quantity,

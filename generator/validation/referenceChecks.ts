@@ -1,7 +1,9 @@
 // Reference checks of the solver against published values, in one list: the tests assert them and
 // the site's method-and-validation page prints them, so both show the same numbers.
-// Shapes are built with λ = 1 m (frequency = c), lengths in wavelengths.
+// Shapes are built with λ = 1 m (frequency = c), lengths in wavelengths. The checks over the ground
+// are in groundChecks.ts and come after the free-space ones.
 import { frontHalfPowerBeamwidthDeg } from "./beamwidth.js";
+import { GROUND_CASES } from "./groundChecks.js";
 import { solveShape, validateShape, type Shape } from "../em/index.js";
 import { surfaceResistancePerM } from "../em/impedance.js";
 import { SPEED_OF_LIGHT_M_PER_S } from "../units.js";
@@ -37,7 +39,7 @@ export function veeShape(lengthWl: number, armDeg: number, radiusWl: number): Sh
   });
 }
 
-interface Case {
+export interface ReferenceCase {
   id: string;
   quantity: string;
   unit: string;
@@ -47,8 +49,8 @@ interface Case {
   compute: () => number;
 }
 
-const CASES: Case[] = [
-  ...([[0.5, 2.15], [1.0, 3.82], [1.25, 5.16], [1.5, 3.48]] as const).map(([l, d]): Case => ({
+const FREE_SPACE_CASES: ReferenceCase[] = [
+  ...([[0.5, 2.15], [1.0, 3.82], [1.25, 5.16], [1.5, 3.48]] as const).map(([l, d]): ReferenceCase => ({
     id: `dipole-${l}wl-directivity`, quantity: `directivity of a ${l} λ dipole, radius 1e-3 λ`, unit: "dBi", reference: d, source: BALANIS, tolerance: 0.2,
     compute: () => solveShape(dipole(l, 1e-3)).peakDirectivityDbi,
   })),
@@ -103,6 +105,8 @@ function lossReferenceOhm(): number {
   const f = 14e6;
   return (surfaceResistancePerM(f, 1e-4, 1.4e6) * (0.48 * SPEED_OF_LIGHT_M_PER_S)) / f / 2;
 }
+
+const CASES: ReferenceCase[] = [...FREE_SPACE_CASES, ...GROUND_CASES];
 
 export function referenceChecks(): ReferenceCheck[] {
   return CASES.map(({ compute, ...c }) => {

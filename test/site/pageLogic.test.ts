@@ -197,6 +197,8 @@ describe("small helpers", () => {
     expect(rows[0]).toMatchObject({ reference: "2.15 dBi", ours: "2.10 dBi", deviation: "\u22120.05 dBi", tolerance: "±0.20 dBi" });
     expect(rows[1].deviation).toBe("+0.0009 Ω");
     expect(rows[1].tolerance).toBe("±0.0015 Ω");
+    const ratio = validationRows([{ id: "c", quantity: "|Γ|", unit: "", reference: 0.8027, source: "s", ours: 0.8031, deviation: 0.0004, tolerance: 0.005, pass: true }]);
+    expect(ratio[0]).toMatchObject({ reference: "0.8027", ours: "0.8031", deviation: "+0.0004", tolerance: "±0.0050" }); // a ratio has no unit, no trailing space
   });
 
   it("keeps hostile text intact in the data (escaping is the page's job)", () => {
