@@ -6,7 +6,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { checkAgainstFinerMesh } from "../generator/analysis/convergenceCheck.js";
 import { parseShape } from "../generator/em/index.js";
-import { shapeFileText } from "../generator/site/downloads.js";
+import { siteShapeFileText } from "../generator/site/downloads.js";
 
 const args = process.argv.slice(2);
 const onlyAt = args.indexOf("--only");
@@ -18,7 +18,8 @@ for (const file of readdirSync(dir).filter((f) => f.endsWith(".json")).sort()) {
   const entry = JSON.parse(readFileSync(join(dir, file), "utf8"));
   if (entry.status !== "ok" || (only && !only.test(entry.id))) continue;
   if (!entry.figures.uncertainty) { stale++; continue; }
-  const r = checkAgainstFinerMesh(parseShape(shapeFileText(entry), file), entry.figures);
+  // over ground: the shape as hung with its ground, the gain judged in the entry's elevation window
+  const r = checkAgainstFinerMesh(parseShape(siteShapeFileText(entry), file), entry.figures, 4, entry.inputs.overGround?.elevationWindowDeg);
   checked++;
   worstG = Math.max(worstG, r.gainDiffDb);
   worstZ = Math.max(worstZ, r.impedanceDiffPercent);

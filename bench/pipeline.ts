@@ -24,7 +24,7 @@ export function benchPipeline(bandIds = ["2m", "70cm"], lengthsWl = [1.5, 2.0]) 
   }
   for (const cell of expandGrid(grid).filter((c) => c.piecesPerArm > 1)) {
     const c0 = cpuS();
-    computeEntry(grid, cell, refs.get(`${cell.lengthWl}|${cell.piecesPerArm}|${cell.variant}`)!);
+    computeEntry(grid, cell, refs.get(`${cell.lengthWl}|${cell.piecesPerArm}|${cell.variant}`)!, refs.get(`${cell.lengthWl}|${cell.piecesPerArm - 1}|${cell.variant}`) ?? null);
     add(`entry ${cell.variant}`, cpuS() - c0);
   }
   return cpu;

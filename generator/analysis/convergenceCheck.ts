@@ -25,10 +25,11 @@ export interface FinerMeshCheck {
 
 const SLACK = 1e-6;
 
-export function checkAgainstFinerMesh(shape: Shape, published: PublishedFigures, factor = 4): FinerMeshCheck {
+/** Over ground, `elevationWindowDeg` is the window the published gain was judged in (the entry's purpose). */
+export function checkAgainstFinerMesh(shape: Shape, published: PublishedFigures, factor = 4, elevationWindowDeg?: [number, number]): FinerMeshCheck {
   const start = shape.segmentsPerWavelength ?? DEFAULT_SEGMENTS_PER_WAVELENGTH;
   const spw = Math.min(factor * start, refinementCap(shape, start));
-  const fine = solveShape(shape, { segmentsPerWavelength: spw });
+  const fine = solveShape(shape, { segmentsPerWavelength: spw, ...(shape.ground && elevationWindowDeg ? { elevationWindowDeg } : {}) });
   const z = fine.inputImpedanceOhm, p = published.inputImpedanceOhm;
   const gainDiffDb = Math.abs(published.gainDbi - fine.peakGainDbi);
   const impedanceDiffPercent = (100 * Math.hypot(p.re - z.re, p.im - z.im)) / Math.hypot(p.re, p.im);

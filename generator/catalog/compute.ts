@@ -22,8 +22,8 @@ import type { Entry } from "./entrySchema.js";
 import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
-import { GENERATOR_VERSION, SEARCH_VERSION } from "./versions.js";
-import { computeOffCentreReference, designCentreFed, firstHoldingAsBuilt, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
+import { GENERATOR_VERSION, POLISH_VERSION, SEARCH_VERSION } from "./versions.js";
+import { computeOffCentreReference, designCentreFed, firstHoldingAsBuilt, offCentreStarts, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
   lengthWl: number;
@@ -118,7 +118,7 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
     band: cell.band,
     tolerance: grid.tolerance,
     reference: referenceHash(grid, cell),
-    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION },
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION, polish: POLISH_VERSION },
   }));
 }
 
@@ -136,12 +136,13 @@ const polishFellShort = (o: DesignOutcome, reference: ReferenceResult): boolean 
 /** A reference that met no constraint is not polished when its band SWR exceeds this × the limit. */
 export const DOOMED_POLISH_SWR_FACTOR = 2;
 
-export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult): Entry {
+/** `previous`: the reference with one piece fewer per arm (none for K = 1), an off-centre start. */
+export function computeEntry(grid: Grid, cell: CellRequest, reference: ReferenceResult, previous: ReferenceResult | null): Entry {
   const request = bandRequest(grid, cell);
   const tolerance = { samples: grid.tolerance.samples, bendSigmaDeg: grid.tolerance.bendSigmaDeg, lengthSigmaFraction: grid.tolerance.lengthSigmaPercent / 100, seed: grid.seed };
   // direct feed: the limit itself first, a margin only when that design does not hold as built (computeOffCentre.ts)
   const { outcome, startedFrom, family, analysis } = firstHoldingAsBuilt(request, (margin) => {
-    const d = designCell(grid, request, reference, margin);
+    const d = designCell(grid, request, reference, previous, margin);
     const analysis = d.outcome.status === "ok"
       ? analyzeDesign(shapeFor(d.outcome, request, d.family), { bandHz: request.bandHz!, lineImpedanceOhm: request.lineImpedanceOhm, tolerance })
       : null;
@@ -151,7 +152,7 @@ export function computeEntry(grid: Grid, cell: CellRequest, reference: Reference
   return buildEntry({ grid, cell, request, outcome, startedFrom, analysis, inputHash: entryInputHash(grid, cell), tolerance, family });
 }
 
-function designCell(grid: Grid, request: DesignRequest, reference: ReferenceResult, margin: number) {
+function designCell(grid: Grid, request: DesignRequest, reference: ReferenceResult, previous: ReferenceResult | null, margin: number) {
   // polish the reference shape (or, when the reference met no constraint, its least-bad attempt,
   // unless that attempt is too far from the SWR limit for a local polish to reach it)
   const perBand = searchPerBand(request, reference.status); // direct feed: a polish alone loses (computeOffCentre.ts)
@@ -176,7 +177,7 @@ function designCell(grid: Grid, request: DesignRequest, reference: ReferenceResu
     outcome = { ...outcome, message: infeasibleMessage(outcome, request, reference.status !== "ok", grid.reference.relativeBandwidth) };
   }
   let family: Family;
-  ({ outcome, family } = tryOffCentre(request, outcome, reference.offCentre, margin));
+  ({ outcome, family } = tryOffCentre(request, outcome, offCentreStarts(reference.offCentre, previous?.offCentre, request.piecesPerArm), margin));
   return { outcome, startedFrom, family };
 }
 

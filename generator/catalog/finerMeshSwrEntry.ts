@@ -1,9 +1,9 @@
 // The finer-mesh SWR check (analysis/finerMeshSwr.ts) on a catalog entry: which entries are published
 // as meeting the SWR limit (the as-built rule: feed.toleranceSwr.meetsLimitAsBuilt), and the check's
-// inputs from the entry's own shape, sweep and recommended feed.
+// inputs from the entry's own shape (over the ground: as hung, with its ground), sweep and recommended feed.
 import { checkSwrOnFinerMesh, type FinerMeshSwrCheck } from "../analysis/finerMeshSwr.js";
 import { parseShape } from "../em/index.js";
-import { shapeFileText } from "../site/downloads.js";
+import { siteShapeFileText } from "../site/downloads.js";
 import type { OkEntry } from "../site/ok.js";
 
 /** Why an ok entry is not checked, or null when it is published as meeting the limit. */
@@ -19,7 +19,7 @@ export function checkEntrySwrOnFinerMesh(entry: OkEntry): FinerMeshSwrCheck {
   const feed = entry.feed!;
   const option = feed.options.options[feed.options.recommended!];
   const inBand = entry.sweep.points.filter((p) => p.inBand);
-  return checkSwrOnFinerMesh(parseShape(shapeFileText(entry), entry.id), {
+  return checkSwrOnFinerMesh(parseShape(siteShapeFileText(entry), entry.id), {
     publishedSegmentsPerWavelength: entry.figures.uncertainty!.segmentsPerWavelength,
     bandHz: [entry.inputs.bandLowHz, entry.inputs.bandHighHz],
     publishedBand: inBand.map((p, i) => ({ frequencyHz: p.frequencyHz, swr: option.bandSwr[i] ?? Infinity })),

@@ -131,10 +131,14 @@ async function generateLocked(o: GenerateOptions): Promise<GenerateReport> {
       }
       return refs.get(id)!;
     };
+    const previousOf = (key: ReferenceKey): Promise<ReferenceResult | null> => {
+      const prev = previousKey(key);
+      return prev ? referenceOf(prev) : Promise.resolve(null);
+    };
     await Promise.all(todo.map(async (c) => {
       const cell = c.cell;
       const task: Task = c.kind === "free"
-        ? { kind: "entry", grid: o.grid, cell: c.cell, reference: await referenceOf(keyOf(c.cell)) }
+        ? { kind: "entry", grid: o.grid, cell: c.cell, reference: await referenceOf(keyOf(c.cell)), previous: await previousOf(keyOf(c.cell)) }
         : { kind: "ground", grid: o.grid, cell: c.cell };
       const entry = await scheduler.run<Entry>(task, 1);
       await writeEntry(o.outDir, entry);

@@ -99,8 +99,9 @@ export async function verifyCatalog(grid: Grid, dir: string, sample: number, see
     if (c.kind === "ground") again = serialize(computeGroundEntry(grid, c.cell));
     else {
       const cell = c.cell;
-      const reference = await referenceFor(grid, dir, { lengthWl: cell.lengthWl, piecesPerArm: cell.piecesPerArm, variant: cell.variant });
-      again = serialize(computeEntry(grid, cell, reference));
+      const key: ReferenceKey = { lengthWl: cell.lengthWl, piecesPerArm: cell.piecesPerArm, variant: cell.variant };
+      const prev = previousKey(key);
+      again = serialize(computeEntry(grid, cell, await referenceFor(grid, dir, key), prev ? await referenceFor(grid, dir, prev) : null));
     }
     const stored = await readFile(entryFile(dir, id), "utf8");
     if (again !== stored) report("differs", `${id}: recomputing it gives different bytes`);

@@ -6,3 +6,6 @@
 // only. (The search version keeps the name the references were first hashed under.)
 export const SEARCH_VERSION = "bentwire-catalog-4";
 export const GENERATOR_VERSION = "bentwire-catalog-5";
+// The band polish of the free-space entries (compute.ts, computeOffCentre.ts): part of their input
+// hash only, so a change there recomputes the free-space entries and not those over the ground.
+export const POLISH_VERSION = "bentwire-polish-2";

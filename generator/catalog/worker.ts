@@ -7,10 +7,10 @@ import type { GroundCellRequest } from "./gridHf.js";
 
 export type Task =
   | { kind: "reference"; grid: Grid; key: ReferenceKey; previous: ReferenceResult | null }
-  | { kind: "entry"; grid: Grid; cell: CellRequest; reference: ReferenceResult }
+  | { kind: "entry"; grid: Grid; cell: CellRequest; reference: ReferenceResult; previous: ReferenceResult | null }
   | { kind: "ground"; grid: Grid; cell: GroundCellRequest };
 
 export default function run(task: Task) {
   if (task.kind === "reference") return computeReference(task.grid, task.key, task.previous);
-  return task.kind === "ground" ? computeGroundEntry(task.grid, task.cell) : computeEntry(task.grid, task.cell, task.reference);
+  return task.kind === "ground" ? computeGroundEntry(task.grid, task.cell) : computeEntry(task.grid, task.cell, task.reference, task.previous);
 }

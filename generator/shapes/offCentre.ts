@@ -51,6 +51,19 @@ export function packOffCentre(p: OffCentreParameters): number[] {
   return [p.feedFraction, p.halfApexRad, ...p.right.bendAnglesRad, ...p.right.pieceFractions, ...p.left.bendAnglesRad, ...p.left.pieceFractions];
 }
 
+/**
+ * The same shape with one more piece on each arm: each arm's last piece split in two equal halves
+ * with a 0° bend between them (as addPiece in bentArm.ts does for the mirror family).
+ */
+export function addPieceOffCentre(x: readonly number[], piecesPerArm: number): number[] {
+  const p = unpackOffCentre(x, piecesPerArm);
+  const split = (a: ArmParameters): ArmParameters => {
+    const last = 1 - a.pieceFractions.reduce((s, u) => s + u, 0);
+    return { bendAnglesRad: [...a.bendAnglesRad, 0], pieceFractions: [...a.pieceFractions, last / 2] };
+  };
+  return packOffCentre({ ...p, right: split(p.right), left: split(p.left) });
+}
+
 /** Arm lengths (m): left = tL, right = (1 − t)L. */
 export function armLengthsM(p: OffCentreParameters, spec: OffCentreSpec): { leftM: number; rightM: number } {
   return { leftM: p.feedFraction * spec.wireLengthM, rightM: (1 - p.feedFraction) * spec.wireLengthM };

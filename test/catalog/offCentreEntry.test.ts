@@ -42,7 +42,7 @@ let reference: ReferenceResult;
 let entry: Entry;
 beforeAll(() => {
   reference = computeReference(grid, key, null);
-  entry = computeEntry(grid, cell, reference);
+  entry = computeEntry(grid, cell, reference, null); // no K − 1 start: the own reference alone
 });
 
 describe("catalog: off-centre-fed entry where the centre feed cannot meet the limit", () => {
