@@ -10,10 +10,28 @@
 import { getCollection } from "astro:content";
 import type { Entry } from "../generator/site/catalog";
 import { bandsOf, type Band } from "../generator/site/catalog";
-import type { PdfCache } from "../generator/site/downloads";
+import { downloadFiles, type DownloadFile, type PdfCache } from "../generator/site/downloads";
+import { newFigureCache, type FigureCache } from "../generator/site/figures";
 
 /** The build's printable PDFs, made once and shared by the pages, the files and the checksum lists. */
 export const pdfCache: PdfCache = new Map();
+
+/** The build's figures: each plot drawn once, its size kept for the design page, the card fonts loaded once. */
+export const figureCache: FigureCache = newFigureCache();
+
+const downloadsMade = new Map<string, Promise<DownloadFile[]>>();
+
+/**
+ * A design's downloads, made once for the build: the file route, the design page, its sheet maps
+ * and the site's checksum list all read the same list (they made it four times before, template
+ * SVGs and checksums included). The file route holds every list as its props anyway.
+ */
+export function downloadsOf(entry: Entry): Promise<DownloadFile[]> {
+  if (import.meta.env.DEV) return downloadFiles(entry, pdfCache);
+  let made = downloadsMade.get(entry.id);
+  if (!made) downloadsMade.set(entry.id, (made = downloadFiles(entry, pdfCache)));
+  return made;
+}
 
 function deepFreeze<T>(value: T): T {
   if (value !== null && typeof value === "object" && !Object.isFrozen(value)) {
