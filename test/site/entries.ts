@@ -18,7 +18,8 @@ export const ENTRIES_DIR = process.env.BENTWIRE_ENTRIES ? resolve(process.env.BE
  */
 export function siteTestEntriesDir(): string {
   if (process.env.BENTWIRE_ENTRIES) return ENTRIES_DIR;
-  const dir = join(import.meta.dirname, "../../node_modules/.cache/bentwire-site-tests/site-test-entries");
+  const cache = process.env.BENTWIRE_TEST_CACHE ? resolve(process.env.BENTWIRE_TEST_CACHE) : join(import.meta.dirname, "../../node_modules/.cache/bentwire-site-tests");
+  const dir = join(cache, "site-test-entries"); // the same folder as harness.ts's CACHE
   mkdirSync(dir, { recursive: true });
   const wanted = new Map<string, string>();
   for (const name of readdirSync(ENTRIES_DIR).filter((n) => n.endsWith(".json")).sort()) {
