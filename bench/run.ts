@@ -1,4 +1,4 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|pipeline|designer]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
@@ -88,6 +88,14 @@ if (only === "designer") {
   const d = await benchDesigner();
   out.designer = d;
   if (!json) printDesigner(d);
+}
+
+// only when asked: two site builds (8 and 160 entries), about 2 CPU min
+if (only === "site") {
+  const { benchSiteBuild, printSiteBuild } = await import("./siteBuild.js");
+  const b = await benchSiteBuild();
+  out.site = b;
+  if (!json) printSiteBuild(b);
 }
 
 if (json) console.log(JSON.stringify(out));

@@ -16,10 +16,16 @@ type Style = Record<string, string | number>;
 interface Node { type: string; props: { style?: Style; src?: string; width?: number; height?: number; children?: (Node | string)[] | Node | string } }
 const div = (style: Style, ...children: (Node | string)[]): Node => ({ type: "div", props: { style: { display: "flex", ...style }, children } });
 
-/** Inter 400/700, Latin plus Greek (for λ, θ, φ), resolved from the installed package. */
-function loadFonts(): { name: string; data: Buffer; weight: 400 | 700; style: "normal" }[] {
+export interface CardFont { name: string; data: Buffer; weight: 400 | 700; style: "normal" }
+
+/**
+ * Inter 400/700, Latin plus Greek (for λ, θ, φ), resolved from the installed package. A caller
+ * drawing many cards loads them once and passes the same array to each: satori keeps the fonts it
+ * has parsed keyed by these very Buffers, so the same objects spare it parsing them per card.
+ */
+export function loadCardFonts(): CardFont[] {
   const require = createRequire(import.meta.url);
-  const fonts: { name: string; data: Buffer; weight: 400 | 700; style: "normal" }[] = [];
+  const fonts: CardFont[] = [];
   for (const subset of ["latin", "greek"]) for (const weight of [400, 700] as const) {
     let path: string;
     try { path = require.resolve(`@fontsource/inter/files/inter-${subset}-${weight}-normal.woff`); } catch { continue; }
@@ -39,7 +45,7 @@ function figure(value: string, label: string): Node {
 }
 
 /** The card as satori's SVG (text already turned into paths); exported for tests. */
-export async function shareCardSvg(entry: Entry): Promise<string> {
+export async function shareCardSvg(entry: Entry, fonts: CardFont[] = loadCardFonts()): Promise<string> {
   const { figures } = okParts(entry, "shareCardPng");
   const i = entry.inputs;
   const shape = shapeSvg(entry, { dimensions: false, widthPx: IMAGE_BOX.w });
@@ -61,10 +67,10 @@ export async function shareCardSvg(entry: Entry): Promise<string> {
     div({ width: IMAGE_BOX.w + 40, height: CARD_HEIGHT_PX - 112 - 4, alignItems: "center", justifyContent: "center", backgroundColor: PALETTE.paper, borderRadius: 20, border: `2px solid ${PALETTE.grid}` },
       { type: "img", props: { src: `data:image/svg+xml;base64,${Buffer.from(shape).toString("base64")}`, width: Math.round(w), height: Math.round(h) } }));
   // satori's types name React's element type; the plain object tree is what it reads at run time.
-  return satori(tree as never, { width: CARD_WIDTH_PX, height: CARD_HEIGHT_PX, fonts: loadFonts() });
+  return satori(tree as never, { width: CARD_WIDTH_PX, height: CARD_HEIGHT_PX, fonts });
 }
 
-export async function shareCardPng(entry: Entry): Promise<Buffer> {
-  const svg = await shareCardSvg(entry);
+export async function shareCardPng(entry: Entry, fonts: CardFont[] = loadCardFonts()): Promise<Buffer> {
+  const svg = await shareCardSvg(entry, fonts);
   return sharp(Buffer.from(svg)).resize(CARD_WIDTH_PX, CARD_HEIGHT_PX).flatten({ background: PALETTE.paper }).png().toBuffer();
 }

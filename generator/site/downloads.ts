@@ -183,11 +183,14 @@ export async function downloadFiles(entry: Entry, cache: PdfCache, options: { pd
   return files;
 }
 
-/** One checksum list over every download of the site, names relative to the site root. */
-export async function allChecksums(entries: readonly Entry[], filePath: (id: string, name: string) => string, cache: PdfCache): Promise<string> {
+/**
+ * One checksum list over every download of the site, names relative to the site root. `filesOf`
+ * gives a design's downloads (the site passes the lists its pages made already).
+ */
+export async function allChecksums(entries: readonly Entry[], filePath: (id: string, name: string) => string, cache: PdfCache, filesOf = (e: Entry) => downloadFiles(e, cache)): Promise<string> {
   const all: { name: string; content: string | Uint8Array }[] = [];
   for (const e of entries) {
-    for (const f of await downloadFiles(e, cache)) if (f.name !== CHECKSUM_FILE) all.push({ name: filePath(e.id, f.name), content: f.content });
+    for (const f of await filesOf(e)) if (f.name !== CHECKSUM_FILE) all.push({ name: filePath(e.id, f.name), content: f.content });
   }
   return sha256Listing(all);
 }

@@ -3,6 +3,7 @@
 import sharp from "sharp";
 import { describe, expect, it } from "vitest";
 import { shareCardPng, thumbnailPng } from "../../generator/render/index.js";
+import { loadCardFonts } from "../../generator/render/shareCardPng.js";
 import { okEntries } from "./fixtures.js";
 
 const entry = okEntries()[0];
@@ -30,5 +31,10 @@ describe("shareCardPng", () => {
     const meta = await sharp(a).metadata();
     expect([meta.format, meta.width, meta.height]).toEqual(["png", 1200, 630]);
     expect(a.equals(b)).toBe(true);
+  });
+
+  it("gives the same bytes with the fonts loaded once for many cards (as the site build does)", async () => {
+    const fonts = loadCardFonts();
+    for (const e of okEntries().slice(0, 3)) expect((await shareCardPng(e, fonts)).equals(await shareCardPng(e)), e.id).toBe(true);
   });
 });

@@ -14,11 +14,12 @@ export const ENTRIES_DIR = process.env.BENTWIRE_ENTRIES ? resolve(process.env.BE
  * the free-space part of designs/entries in the test cache (these tests pick entries that have
  * templates, polar cuts and a scale calculator; pages over the ground are tested on their own
  * fixtures in overGround.browser.test.ts), rewritten only when it differs (the build's fingerprint
- * covers the folder's contents). The whole catalog's site takes about half an hour to build here.
+ * covers the folder's contents). The whole catalog's site takes about 3 CPU minutes to build.
  */
 export function siteTestEntriesDir(): string {
   if (process.env.BENTWIRE_ENTRIES) return ENTRIES_DIR;
-  const dir = join(import.meta.dirname, "../../node_modules/.cache/bentwire-site-tests/site-test-entries");
+  const cache = process.env.BENTWIRE_TEST_CACHE ? resolve(process.env.BENTWIRE_TEST_CACHE) : join(import.meta.dirname, "../../node_modules/.cache/bentwire-site-tests");
+  const dir = join(cache, "site-test-entries"); // the same folder as harness.ts's CACHE
   mkdirSync(dir, { recursive: true });
   const wanted = new Map<string, string>();
   for (const name of readdirSync(ENTRIES_DIR).filter((n) => n.endsWith(".json")).sort()) {

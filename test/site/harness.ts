@@ -12,7 +12,8 @@ import { stampMatches, writeStamp, type StampInputs } from "../../generator/site
 
 export const ROOT = resolve(import.meta.dirname, "../..");
 export const CHROMIUM = "/usr/bin/chromium";
-export const CACHE = join(ROOT, "node_modules/.cache/bentwire-site-tests");
+/** Test builds and fixtures; BENTWIRE_TEST_CACHE moves them (node_modules may be shared by several checkouts). */
+export const CACHE = process.env.BENTWIRE_TEST_CACHE ? resolve(process.env.BENTWIRE_TEST_CACHE) : join(ROOT, "node_modules/.cache/bentwire-site-tests");
 
 /** Vitest puts Vite's own variables into process.env; a child build must not inherit them (a
  * BASE_URL of "/" there would override the base path of a sub-path build). */
@@ -55,7 +56,8 @@ export async function ensureSite(name: string, entriesDir: string, base: string,
   if (await stampMatches(dir, inputs)) return { dir, base, built: false, seconds: 0 };
   const t0 = Date.now();
   await rm(dir, { recursive: true, force: true });
-  const env = { BENTWIRE_ENTRIES: entriesDir, BENTWIRE_BASE: base, BENTWIRE_OUT_DIR: dir, ASTRO_TELEMETRY_DISABLED: "1", NO_COLOR: "1" };
+  // Astro's content store goes beside the build: two builds at once (another checkout's tests) must not share one
+  const env = { BENTWIRE_ENTRIES: entriesDir, BENTWIRE_BASE: base, BENTWIRE_OUT_DIR: dir, BENTWIRE_CACHE_DIR: `${dir}.astro-cache`, ASTRO_TELEMETRY_DISABLED: "1", NO_COLOR: "1" };
   await run(process.execPath, [join(ROOT, "node_modules/astro/astro.js"), "build"], env);
   await run(join(ROOT, "node_modules/.bin/pagefind"), ["--site", dir], env);
   await writeStamp(dir, inputs);

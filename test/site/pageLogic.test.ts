@@ -4,7 +4,7 @@ import { parseShape } from "../../generator/em/shapeFile.js";
 import { bandsOf, bestOf, checkSiteEntry, totals } from "../../generator/site/catalog.js";
 import { compareRows, escapeText, idsFromQuery, overlayPolarSvg } from "../../generator/site/compare.js";
 import { CHECKSUM_FILE, allChecksums, downloadFiles, downloadRows, shapeFileOf, sheetMaps, templateSheets, type DownloadFile, type PdfCache } from "../../generator/site/downloads.js";
-import { svgSize } from "../../generator/site/figures.js";
+import { figureFiles, figureSizes, newFigureCache, renderFigure, svgSize } from "../../generator/site/figures.js";
 import { gainDbi, parseShown, shownDecimals } from "../../generator/site/format.js";
 import { isOk } from "../../generator/site/ok.js";
 import { at, normalBase, paths } from "../../generator/site/paths.js";
@@ -132,6 +132,19 @@ describe("downloads", () => {
   it("gives an infeasible entry its JSON and checksums only", async () => {
     const bad = resealed(ok, (e) => { e.status = "infeasible"; e.shape = null; e.figures = null; });
     expect((await downloadFiles(bad, cache)).map((f) => f.group)).toEqual(["entry", "checksums"]);
+  });
+});
+
+describe("figures", () => {
+  // the build draws each figure once and keeps what later pages need (site/data.ts); that must only save time
+  it("a build's shared figure cache gives the bytes and sizes of a fresh draw", async () => {
+    const designs = entries.filter(isOk).slice(0, 3);
+    const cache = newFigureCache();
+    for (const e of designs) for (const file of figureFiles) {
+      const shared = (await renderFigure(e, file, cache)).body, fresh = (await renderFigure(e, file)).body;
+      expect(Buffer.from(shared).equals(Buffer.from(fresh)), `${e.id} ${file}`).toBe(true);
+    }
+    for (const e of designs) expect(figureSizes(e, cache)).toEqual(figureSizes(e));
   });
 });
 

@@ -1,7 +1,7 @@
 // The figures of every buildable design, written at build time: plot SVGs, a PNG thumbnail and a
 // share card. The drawing itself lives in generator/render.
 import type { APIRoute, GetStaticPaths } from "astro";
-import { allEntries } from "../../../data";
+import { allEntries, figureCache } from "../../../data";
 import { figureFiles, renderFigure, type FigureFile } from "../../../../generator/site/figures";
 import { isOk, type OkEntry } from "../../../../generator/site/ok";
 
@@ -12,6 +12,6 @@ export const getStaticPaths = (async () => {
 
 export const GET: APIRoute = async ({ props }) => {
   const { entry, file } = props as { entry: OkEntry; file: FigureFile };
-  const { body, mediaType } = await renderFigure(entry, file);
+  const { body, mediaType } = await renderFigure(entry, file, figureCache);
   return new Response(body, { headers: { "Content-Type": mediaType } });
 };

@@ -1,12 +1,12 @@
 // Every download of every design, written at build time (see generator/site/downloads.ts).
 import type { APIRoute, GetStaticPaths } from "astro";
-import { allEntries, pdfCache } from "../../../../data";
-import { downloadFiles, type DownloadFile } from "../../../../../generator/site/downloads";
+import { allEntries, downloadsOf } from "../../../../data";
+import type { DownloadFile } from "../../../../../generator/site/downloads";
 
 export const getStaticPaths = (async () => {
   const entries = await allEntries();
   const out = [];
-  for (const entry of entries) for (const file of await downloadFiles(entry, pdfCache)) out.push({ params: { id: entry.id, name: file.name }, props: { file } });
+  for (const entry of entries) for (const file of await downloadsOf(entry)) out.push({ params: { id: entry.id, name: file.name }, props: { file } });
   return out;
 }) satisfies GetStaticPaths;
 
