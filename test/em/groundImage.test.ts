@@ -10,6 +10,7 @@ import { buildMesh, fillImpedance, solveComplex, solveFeed, solveShape, validate
 import { ETA0_OHM } from "../../generator/units.js";
 import { feedGapM, gapCurrent, gapExcitation } from "../../generator/em/feedSource.js";
 import { ONE_METRE_WAVELENGTH_HZ as F } from "../helpers/shapes.js";
+import { sineCosineIntegrals } from "../../generator/validation/inducedEmf.js";
 
 const horizontal = (h: number, a: number, ground = true) =>
   validateShape({
@@ -62,24 +63,11 @@ describe("image coupling equals the free-space pair (Balanis §4.7)", () => {
   });
 });
 
-// Si and Ci by their power series (Abramowitz & Stegun 5.2.14 and 5.2.16), fine for x < 20.
-const EULER_GAMMA = 0.5772156649015329;
-function siCi(x: number): [number, number] {
-  let si = 0, ci = EULER_GAMMA + Math.log(x), term = x; // term = x^(2n+1)/(2n+1)! · (−1)^n
-  for (let n = 0; n < 60; n++) {
-    si += term / (2 * n + 1);
-    const even = (-term * x) / (2 * n + 2); // (−1)^(n+1) x^(2n+2)/(2n+2)!
-    ci += even / (2 * n + 2);
-    term = (even * x) / (2 * n + 3);
-  }
-  return [si, ci];
-}
-
 /** Z12 of side-by-side half-wave dipoles at spacing d (λ = 1 m), Balanis §8.6. */
 function mutualImpedance(d: number) {
   const k = 2 * Math.PI, l = 0.5;
   const u0 = k * d, u1 = k * (Math.hypot(d, l) + l), u2 = k * (Math.hypot(d, l) - l);
-  const [s0, c0] = siCi(u0), [s1, c1] = siCi(u1), [s2, c2] = siCi(u2);
+  const [s0, c0] = sineCosineIntegrals(u0), [s1, c1] = sineCosineIntegrals(u1), [s2, c2] = sineCosineIntegrals(u2);
   const f = ETA0_OHM / (4 * Math.PI);
   return { re: f * (2 * c0 - c1 - c2), im: -f * (2 * s0 - s1 - s2) };
 }
