@@ -1,9 +1,10 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
 import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchConverged } from "./converged.js";
+import { benchOffCentre } from "./offCentre.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchPipeline } from "./pipeline.js";
 import { benchSolver } from "./solver.js";
@@ -46,6 +47,19 @@ if (wants("optimizer")) {
     console.log("K  best dBi  evals median  evals worst  s median  s worst  total evals (median)  CPU s (median)  median dBi");
     for (const c of cases) {
       console.log(`${c.piecesPerArm}  ${c.bestGainDbi.toFixed(3).padEnd(8)} ${String(c.medianEvaluations).padEnd(13)} ${String(c.worstEvaluations).padEnd(12)} ${c.medianSeconds.toFixed(2).padEnd(9)} ${c.worstSeconds.toFixed(2).padEnd(8)} ${String(c.medianTotalEvaluations).padEnd(21)} ${c.medianCpuSeconds.toFixed(2).padEnd(15)} ${c.medianGainDbi.toFixed(3)}`);
+    }
+  }
+}
+
+if (only === "offcentre") { // not in the default run: about 2 CPU minutes
+  const cases = benchOffCentre();
+  out.offCentre = cases;
+  if (!json) {
+    console.log("\noff-centre reference searches (direct feed, wavelength units, as the catalog runs them; CPU s)");
+    console.log("length  K  centre-fed dBi  off-centre dBi  status      evals  to within 0.1 dB  CPU s   stop reasons");
+    for (const c of cases) {
+      const g = (v: number | null) => (v === null ? "—" : v.toFixed(3));
+      console.log(`${`${c.lengthWl} λ`.padEnd(7)} ${String(c.piecesPerArm).padEnd(2)} ${g(c.centreFedGainDbi).padEnd(15)} ${g(c.gainDbi).padEnd(15)} ${c.status.padEnd(11)} ${String(c.evaluations).padEnd(6)} ${String(c.evaluationsToWithin0p1Db ?? "—").padEnd(17)} ${c.cpuSeconds.toFixed(1).padEnd(7)} ${c.stopReasons.join(", ")}`);
     }
   }
 }
