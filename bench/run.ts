@@ -1,9 +1,10 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|parity|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
 import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchConverged } from "./converged.js";
+import { benchDesignParity, PARITY_DB } from "./designParity.js";
 import { benchOffCentre } from "./offCentre.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchPipeline } from "./pipeline.js";
@@ -61,6 +62,28 @@ if (only === "offcentre") { // not in the default run: about 2 CPU minutes
       const g = (v: number | null) => (v === null ? "—" : v.toFixed(3));
       console.log(`${`${c.lengthWl} λ`.padEnd(7)} ${String(c.piecesPerArm).padEnd(2)} ${g(c.centreFedGainDbi).padEnd(15)} ${g(c.gainDbi).padEnd(15)} ${c.status.padEnd(11)} ${String(c.evaluations).padEnd(6)} ${String(c.evaluationsToWithin0p1Db ?? "—").padEnd(17)} ${c.cpuSeconds.toFixed(1).padEnd(7)} ${c.stopReasons.join(", ")}`);
     }
+  }
+}
+
+if (only === "parity") { // not in the default run: about 10 CPU s per direct-feed cell (--shard i/n splits it)
+  const shardAt = args.indexOf("--shard");
+  const [index, count] = shardAt >= 0 ? args[shardAt + 1].split("/").map(Number) : [1, 1];
+  if (!(Number.isInteger(index) && Number.isInteger(count) && index >= 1 && index <= count)) {
+    console.error("bench: --shard must be i/n with 1 ≤ i ≤ n, e.g. 1/2");
+    process.exit(2);
+  }
+  const cases = benchDesignParity("designs/entries", { index, count });
+  out.parity = cases;
+  if (!json) {
+    console.log(`\ncatalog direct-feed entries against a fresh design (same inputs and seed; a miss: more than ${PARITY_DB} dB under a fresh design that holds as built)`);
+    console.log("entry                              catalog          fresh            holds  catalog − fresh  verdict               CPU s");
+    const g = (v: number | null) => (v === null ? "—" : v.toFixed(3));
+    for (const c of cases) {
+      console.log(`${c.id.padEnd(34)} ${`${g(c.catalogGainDbi)} ${c.catalogFamily === "off-centre" ? "off" : "ctr"}`.padEnd(16)} ${`${g(c.freshGainDbi)} ${c.freshFamily === "off-centre" ? "off" : "ctr"}`.padEnd(16)} ${String(c.freshHoldsAsBuilt ?? "—").padEnd(6)} ${(c.differenceDb === null ? "—" : c.differenceDb.toFixed(3)).padEnd(16)} ${c.verdict.padEnd(21)} ${c.cpuSeconds.toFixed(1)}`);
+    }
+    const counts = new Map<string, number>();
+    for (const c of cases) counts.set(c.verdict, (counts.get(c.verdict) ?? 0) + 1);
+    console.log(`${cases.length} cells: ${[...counts].map(([k, v]) => `${v} ${k}`).join(", ")}; ${cases.reduce((a, c) => a + c.cpuSeconds, 0).toFixed(0)} CPU s`);
   }
 }
 

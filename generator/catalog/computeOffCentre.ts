@@ -15,7 +15,9 @@
 import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
 import { designOffCentre } from "../design/designOffCentre.js";
 import type { DesignRequest } from "../design/request.js";
-import { addPieceOffCentre } from "../shapes/offCentre.js";
+import { addPieceOffCentre, mirrorAsOffCentre } from "../shapes/offCentre.js";
+
+export { mirrorAsOffCentre };
 import type { ReferenceKey } from "./compute.js";
 
 /** The direct-feed search keeps this fraction of the limit's excess over 1: SWR 2 → 1.8. */
@@ -41,14 +43,6 @@ export interface OffCentreReference {
   evaluations: number;
 }
 
-/**
- * The centre-fed parameters [φ1, β…, u…] as an off-centre vector: feed in the middle (t = ½) and
- * both arms alike; at t = ½ each arm is half the wire, so the fractions carry over unchanged.
- */
-export function mirrorAsOffCentre(x: readonly number[], piecesPerArm: number): number[] {
-  const arm = x.slice(1, 2 * piecesPerArm - 1);
-  return [0.5, x[0], ...arm, ...arm];
-}
 
 /**
  * The off-centre search in wavelength units for one direct-feed (length, K), with the centre-fed

@@ -3,7 +3,8 @@
 // the feed sits and the choke an unbalanced feed needs. Over ground (--ground, --height-m,
 // --mounting, --objective) the shape is mounted and scored as the centre-fed family's is. No
 // feasible shape: exit status 3, and --out is written only with --keep-infeasible (as `design`).
-import { designOffCentre, offCentreShapeOf } from "../design/designOffCentre.js";
+// The search is the catalog's: the centre-fed optimum, fed in the middle, starts the off-centre one.
+import { designOffCentreFromCentreFed, offCentreShapeOf } from "../design/designOffCentre.js";
 import type { DesignRequest } from "../design/request.js";
 import { OFF_CENTRE_FEED_NOTE } from "../analysis/feedOptionsStock.js";
 import { convergedSolution } from "../analysis/converged.js";
@@ -40,7 +41,7 @@ export function offCentreParametersReport(x: number[], r: DesignRequest) {
 }
 
 export async function designOffCentreCommand(request: DesignRequest, flags: { json?: boolean; out?: string; keepInfeasible?: boolean }): Promise<void> {
-  const outcome = designOffCentre(request);
+  const outcome = designOffCentreFromCentreFed(request);
   const feasible = outcome.status === "ok";
   if (!feasible) process.exitCode = INFEASIBLE_EXIT;
   const shape = { ...offCentreShapeOf(outcome.x, request), name: `${request.lengthWl} λ wire fed off centre, ${request.piecesPerArm === 1 ? "1 piece" : `${request.piecesPerArm} pieces`} per arm, ${request.variant}, ${request.frequencyHz / 1e6} MHz` };

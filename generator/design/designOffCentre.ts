@@ -13,9 +13,9 @@
 // (step 0.01 in z), as the catalog does per band from a shape found once in wavelength units.
 import { createIpop, nelderMead } from "../optimize/index.js";
 import { offCentreBounds } from "../shapes/offCentreConstraints.js";
-import { offCentreParameterCount } from "../shapes/offCentre.js";
+import { mirrorAsOffCentre, offCentreParameterCount } from "../shapes/offCentre.js";
 import { wavelengthM } from "../units.js";
-import { POLISH_TOL, SEARCH_STOPPING, SWEEP_POINTS_IN_BAND, type DesignOutcome, type DesignProgress } from "./designBentArm.js";
+import { designBentArm, POLISH_TOL, SEARCH_STOPPING, SWEEP_POINTS_IN_BAND, type DesignOutcome, type DesignProgress } from "./designBentArm.js";
 import { checkFrequencies, isFeasible } from "./objective.js";
 import { evaluateOffCentre, offCentreShapeOf, offCentreSpecOf } from "./offCentreObjective.js";
 import { limitsOf, type DesignRequest } from "./request.js";
@@ -96,6 +96,20 @@ export function designOffCentre(r: DesignRequest, options: { start?: number[]; p
     stopReasons: [...stopReasons, ...polish.stopReasons],
     history,
   };
+}
+
+/**
+ * The off-centre search as the catalog runs it (catalog/computeOffCentre.ts): first the centre-fed
+ * search, then the off-centre search from that optimum fed in the middle, which competes as a start,
+ * so the outcome is never worse than the centre-fed shape at the same limits. Evaluations and history
+ * count both searches; progress reports the centre-fed search first.
+ */
+export function designOffCentreFromCentreFed(r: DesignRequest, options: { onProgress?: (p: DesignProgress) => void } = {}): DesignOutcome {
+  const centre = designBentArm(r, { onProgress: options.onProgress });
+  const onProgress = options.onProgress && ((p: DesignProgress) => options.onProgress!({ ...p, evaluations: p.evaluations + centre.evaluations, bestX: null }));
+  const o = designOffCentre(r, { start: mirrorAsOffCentre(centre.x, r.piecesPerArm), onProgress });
+  const shifted = o.history.map((h) => ({ ...h, evaluations: h.evaluations + centre.evaluations }));
+  return { ...o, evaluations: centre.evaluations + o.evaluations, searchEvaluations: centre.searchEvaluations + o.searchEvaluations, history: [...centre.history, ...shifted] };
 }
 
 export { offCentreShapeOf };

@@ -52,6 +52,15 @@ export function packOffCentre(p: OffCentreParameters): number[] {
 }
 
 /**
+ * The centre-fed parameters [φ1, β…, u…] as an off-centre vector: feed in the middle (t = ½) and
+ * both arms alike; at t = ½ each arm is half the wire, so the fractions carry over unchanged.
+ */
+export function mirrorAsOffCentre(x: readonly number[], piecesPerArm: number): number[] {
+  const arm = x.slice(1, 2 * piecesPerArm - 1);
+  return [0.5, x[0], ...arm, ...arm];
+}
+
+/**
  * The same shape with one more piece on each arm: each arm's last piece split in two equal halves
  * with a 0° bend between them (as addPiece in bentArm.ts does for the mirror family).
  */
