@@ -145,6 +145,7 @@ export function computeGroundEntry(grid: Grid, cell: GroundCellRequest): Entry {
     mounting: cell.mounting,
     purpose: cell.purpose as "long-distance" | "near-vertical",
     elevationWindowDeg: cell.elevationWindowDeg,
+    ...(request.verticalClearanceM !== undefined ? { verticalClearanceM: request.verticalClearanceM } : {}),
   };
   return buildEntry({
     grid, cell, request, outcome, startedFrom: "search", analysis, inputHash: groundEntryInputHash(grid, cell), tolerance,

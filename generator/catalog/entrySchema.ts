@@ -43,6 +43,8 @@ export function makeEntrySchema(z: Z) {
       purpose: z.enum(["long-distance", "near-vertical"]),
       /** Elevation window the purpose plans with, degrees above the horizon (long-distance 5–25, near-vertical 60–90). */
       elevationWindowDeg: z.tuple([num, num]),
+      /** Vertical only: no wire point lower than this above the ground (heightM is then the mast top). */
+      verticalClearanceM: num.optional(),
     }).strict().optional(),
   }).strict();
   const shape = z.object({
