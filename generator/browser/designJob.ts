@@ -85,9 +85,12 @@ function groundWords(r: DesignRequest, result: DesignResult, t: Takeoff): { lobe
     : `; in the whole sky the strongest is ${f1(result.peakElevationDeg)}° up at ${f1(result.peakAzimuthDeg)}°, ${result.peakGainDbi.toFixed(2)} dBi`;
   const lobe = `Within ${lo}–${hi}° elevation the strongest direction is ${f1(t.elevationDeg)}° up at azimuth ${f1(t.azimuthDeg)}° (from +x toward +y)${sky}.`;
   const h = roundSignificant(r.heightM!, 6);
-  const mounting = (r.mounting ?? "horizontal") === "vertical"
-    ? `The wire hangs in a vertical plane from the feed at the top, ${f1(result.feedHeightM ?? h)} m up; its lowest point is ${h} m above the ground.`
-    : `The wire plane is level at ${h} m above the ground: supports at the feed, at each bend and at each tip hold it there.`;
+  const lowest = result.lowestPointM === undefined ? "" : `; its lowest point is ${f1(result.lowestPointM)} m above the ground`;
+  const mounting = (r.mounting ?? "horizontal") !== "vertical"
+    ? `The wire plane is level at ${h} m above the ground: supports at the feed, at each bend and at each tip hold it there.`
+    : r.verticalClearanceM !== undefined
+      ? `The wire hangs in a vertical plane from the feed at the top of a ${h} m mast, no point lower than ${roundSignificant(r.verticalClearanceM, 6)} m${lowest}.`
+      : `The wire hangs in a vertical plane from the feed at the top, ${f1(result.feedHeightM ?? h)} m up; its lowest point is ${h} m above the ground.`;
   return { lobe, mounting };
 }
 
@@ -95,7 +98,9 @@ function groundWords(r: DesignRequest, result: DesignResult, t: Takeoff): { lobe
 function noteOf(r: DesignRequest): string {
   if (!r.ground) return "Designed in the browser for the values in the form.";
   const h = roundSignificant(r.heightM!, 6);
-  const support = (r.mounting ?? "horizontal") === "vertical" ? `vertical, lowest point ${h} m up` : `horizontal at ${h} m`;
+  const support = (r.mounting ?? "horizontal") !== "vertical"
+    ? `horizontal at ${h} m`
+    : r.verticalClearanceM !== undefined ? `vertical from a ${h} m mast top, clearance ${roundSignificant(r.verticalClearanceM, 6)} m` : `vertical, lowest point ${h} m up`;
   return `Designed in the browser for the values in the form, over ${groundNameOf(r.ground)} ground, ${support}, objective ${r.objective ?? "peak"}.`;
 }
 

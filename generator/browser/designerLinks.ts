@@ -6,9 +6,10 @@ import { at } from "../site/paths.js";
 /**
  * Query keys, in the order a link writes them. The ground fields last: `ground` (empty = free space,
  * else perfect or a preset name), `heightM`, `mounting` and `objective` (empty = the command line's
- * defaults, horizontal and peak).
+ * defaults, horizontal and peak), then `clearanceM` (vertical only: `heightM` is then the mast top and
+ * no wire point comes lower than the clearance, as `design --clearance-m`).
  */
-export const QUERY_KEYS = ["freqMhz", "bandMhz", "lengthWl", "lengthM", "pieces", "variant", "wireDiameterMm", "conductor", "seed", "ground", "heightM", "mounting", "objective"] as const;
+export const QUERY_KEYS = ["freqMhz", "bandMhz", "lengthWl", "lengthM", "pieces", "variant", "wireDiameterMm", "conductor", "seed", "ground", "heightM", "mounting", "objective", "clearanceM"] as const;
 export type QueryKey = (typeof QUERY_KEYS)[number];
 export type FormState = Record<QueryKey, string>;
 
@@ -37,23 +38,26 @@ export interface DesignInputsOfEntry {
   conductor: string;
   seed: number;
   /** An entry over ground (entrySchema.ts inputs.overGround): its ground preset, support height, mounting and purpose. */
-  overGround?: { groundName: string; heightM: number; mounting: string; purpose: string };
+  overGround?: { groundName: string; heightM: number; mounting: string; purpose: string; verticalClearanceM?: number };
 }
 
 /**
  * The ground fields of an entry: its preset, mounting and purpose (the designer's objective of the
  * same name and window). A horizontal entry's height is its wire plane, as the designer reads it
- * (× factor, a length like any other); a vertical entry's is its mast top, which the designer (like
- * `design --height-m`) does not take, since its vertical height is the lowest point: left empty, so
- * the visitor gives it and the form says so if they do not.
+ * (× factor, a length like any other). A vertical entry's height is its mast top with a clearance
+ * (inputs.overGround.verticalClearanceM), which the designer takes as heightM and clearanceM, both
+ * × factor; a vertical entry without a clearance leaves the height empty, since the designer's
+ * vertical height without one is the lowest point: the visitor gives it and the form says so.
  */
-function groundStateOf(o: DesignInputsOfEntry["overGround"], factor: number): Pick<FormState, "ground" | "heightM" | "mounting" | "objective"> {
-  if (!o) return { ground: "", heightM: "", mounting: "", objective: "" };
+function groundStateOf(o: DesignInputsOfEntry["overGround"], factor: number): Pick<FormState, "ground" | "heightM" | "mounting" | "objective" | "clearanceM"> {
+  if (!o) return { ground: "", heightM: "", mounting: "", objective: "", clearanceM: "" };
+  const atMastTop = o.mounting === "vertical" && o.verticalClearanceM !== undefined;
   return {
     ground: o.groundName,
-    heightM: o.mounting === "horizontal" ? num(o.heightM * factor) : "",
+    heightM: o.mounting === "horizontal" || atMastTop ? num(o.heightM * factor) : "",
     mounting: o.mounting,
     objective: o.purpose,
+    clearanceM: atMastTop ? num(o.verticalClearanceM! * factor) : "",
   };
 }
 

@@ -13,7 +13,7 @@ export { queryOf, QUERY_KEYS, type FormState, type QueryKey } from "./designerLi
 /** What the form shows before anyone types: the CLI's defaults where it has them. */
 export const DEFAULT_STATE: FormState = {
   freqMhz: "", bandMhz: "", lengthWl: "", lengthM: "", pieces: "", variant: "max-gain", wireDiameterMm: "2", conductor: "copper", seed: "1",
-  ground: "", heightM: "", mounting: "", objective: "",
+  ground: "", heightM: "", mounting: "", objective: "", clearanceM: "",
 };
 
 export const QUERY_NAMES: InputNames = { freqMhz: "freqMhz", lengthWl: "lengthWl", lengthM: "lengthM", pieces: "pieces" };
@@ -62,9 +62,14 @@ function groundOf(text: string): Ground | undefined {
   return text.trim() === "" ? undefined : groundByName(text.trim(), "design: ground");
 }
 
-/** The field a message is about (the query key it names first), so the form can mark it. */
+/**
+ * The field a message is about, so the form can mark it: the request field a schema message starts
+ * with ("design: verticalClearanceM: …") when it stands for a query key, else the query key it names first.
+ */
 export function fieldOfMessage(message: string): QueryKey | null {
-  const aliases: [RegExp, QueryKey][] = [[/\bfrequencyHz\b/, "freqMhz"], [/\bpiecesPerArm\b/, "pieces"], [/\bwireDiameterM\b/, "wireDiameterMm"], [/\bbandHz\b/, "bandMhz"], [/\bband\b/, "bandMhz"]];
+  const path = /^design: (verticalClearanceM): /.exec(message);
+  if (path) return "clearanceM";
+  const aliases: [RegExp, QueryKey][] = [[/\bfrequencyHz\b/, "freqMhz"], [/\bpiecesPerArm\b/, "pieces"], [/\bwireDiameterM\b/, "wireDiameterMm"], [/\bbandHz\b/, "bandMhz"], [/\bband\b/, "bandMhz"], [/\bverticalClearanceM\b/, "clearanceM"]];
   const at = (k: QueryKey) => message.search(new RegExp(`\\b${k}\\b`));
   const named = QUERY_KEYS.filter((k) => at(k) >= 0).sort((a, b) => at(a) - at(b));
   if (named.length) return named[0];
@@ -85,6 +90,7 @@ export function requestFromState(state: FormState): DesignRequest {
     seed: whole("seed", state.seed, 0, 2 ** 31 - 1) ?? 1,
     ground: groundOf(state.ground),
     heightM: state.heightM.trim() === "" ? undefined : heightMOfText(state.heightM, "design: heightM"),
+    clearanceM: state.clearanceM.trim() === "" ? undefined : heightMOfText(state.clearanceM, "design: clearanceM"),
   };
   // the command line's defaults over ground (horizontal, peak); in free space only what was given, so
   // a free-space request stays the object it was before the ground fields existed

@@ -41,6 +41,8 @@ export interface DesignFlags {
   ground?: Ground;
   heightM?: number;
   mounting?: string;
+  /** Vertical only: the lowest a wire point may come, metres; --height-m is then the mast top. */
+  clearanceM?: number;
   objective?: string;
 }
 

@@ -10,7 +10,9 @@ export function overGroundLines(request: DesignRequest, overGround: ReturnType<t
   const [lo, hi] = overGround.elevationWindowDeg;
   const lines: string[] = [];
   if (overGround.mounting === "vertical") lines.push("vertical mounting: the wire hangs in a vertical plane and the symmetry axis points straight down from the feed");
-  lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, lowest point ${fixed(request.heightM!, 3)} m; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
+  // with a clearance the height is the mast top and the lowest point is wherever the search left it
+  const lowest = request.verticalClearanceM !== undefined ? `clearance ${fixed(request.verticalClearanceM, 3)} m` : `lowest point ${fixed(request.heightM!, 3)} m`;
+  lines.push(`mounting: ${overGround.mounting}, feed ${fixed(overGround.feedHeightM, 3)} m above the ground, ${lowest}; objective ${overGround.objective}: ${overGround.objectiveGainDbi === null ? "no feasible shape" : `${fixed(overGround.objectiveGainDbi, 2)} dBi`} best gain at ${lo}–${hi}° elevation`);
   return lines;
 }
 

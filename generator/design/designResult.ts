@@ -28,7 +28,7 @@ export function designShape(x: number[], r: DesignRequest) {
   return { ...shapeOf(x, r), name: `${r.lengthWl} λ wire, ${r.piecesPerArm} ${r.piecesPerArm === 1 ? "piece" : "pieces"} per arm, ${r.variant}, ${r.frequencyHz / 1e6} MHz${mountedWords}` };
 }
 
-/** Over ground: the mounting, the objective's elevation window and gain in it, the feed height. */
+/** Over ground: the mounting, the objective's elevation window and gain in it, the feed height (and a vertical clearance when given). */
 export function overGroundReport(request: DesignRequest, outcome: DesignOutcome, shape: ReturnType<typeof designShape>) {
   if (!request.ground) return undefined;
   const objective = request.objective ?? "peak";
@@ -38,6 +38,7 @@ export function overGroundReport(request: DesignRequest, outcome: DesignOutcome,
     elevationWindowDeg: ELEVATION_WINDOWS_DEG[objective],
     objectiveGainDbi: outcome.evaluation.gainDbi,
     feedHeightM: shape.wires[shape.feed.wire].pointsM[shape.feed.vertex][2],
+    ...(request.verticalClearanceM !== undefined ? { verticalClearanceM: request.verticalClearanceM } : {}),
   };
 }
 

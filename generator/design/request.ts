@@ -44,10 +44,10 @@ export const designRequestSchema = z
       ctx.addIssue({ code: "custom", path: ["ground"], message: "a height, a mounting or an elevation objective needs a ground (--ground)" });
     }
     if (r.verticalClearanceM !== undefined && r.mounting !== "vertical") {
-      ctx.addIssue({ code: "custom", path: ["verticalClearanceM"], message: "a clearance applies to the vertical mounting only" });
+      ctx.addIssue({ code: "custom", path: ["verticalClearanceM"], message: "a clearance (--clearance-m) applies to the vertical mounting only (--mounting vertical)" });
     }
     if (r.verticalClearanceM !== undefined && r.heightM !== undefined && r.verticalClearanceM >= r.heightM) {
-      ctx.addIssue({ code: "custom", path: ["verticalClearanceM"], message: `the clearance must be below the mast height ${r.heightM} m` });
+      ctx.addIssue({ code: "custom", path: ["verticalClearanceM"], message: `the clearance (--clearance-m) must be below the mast height ${r.heightM} m (--height-m)` });
     }
     if (r.heightM !== undefined && r.heightM < 5 * r.wireDiameterM) {
       ctx.addIssue({ code: "custom", path: ["heightM"], message: `height must be at least 5 wire diameters (${5 * r.wireDiameterM} m)` });

@@ -23,6 +23,8 @@ export interface DesignInputs {
   heightM?: number;
   mounting?: string;
   objective?: string;
+  /** Vertical only: every wire point at least this many metres up; heightM is then the mast top (the feed). */
+  clearanceM?: number;
 }
 
 /** What each value is called where it was given (command-line flags by default). */
@@ -70,6 +72,7 @@ export function requestFromInputs(inputs: DesignInputs, names: InputNames = FLAG
       heightM: inputs.heightM,
       mounting: inputs.mounting,
       objective: inputs.objective,
+      verticalClearanceM: inputs.clearanceM,
     },
     label,
   );

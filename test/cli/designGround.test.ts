@@ -29,8 +29,23 @@ describe("bentwire design over ground", () => {
     expect(again.energyBalanceError).toBeLessThan(1e-3);
   });
 
+  it("vertical from a mast top with --clearance-m: the feed at the height given, no point under the clearance", () => {
+    const run = cli("design", "--freq-mhz", "145", "--length-wl", "1.5", "--pieces", "2", "--ground", "average", "--height-m", "3",
+      "--mounting", "vertical", "--clearance-m", "1", "--json");
+    expect(run.status, run.stderr).toBe(0);
+    const r = JSON.parse(run.stdout);
+    const zs = r.shape.wires[0].pointsM.map((p: number[]) => p[2]);
+    expect(r.feedHeightM).toBeCloseTo(3, 9);
+    expect(Math.max(...zs)).toBeCloseTo(3, 9); // the feed is the top
+    expect(Math.min(...zs)).toBeGreaterThanOrEqual(1 - 1e-9);
+    expect(r.verticalClearanceM).toBe(1);
+  }, 120_000);
+
   for (const [args, why] of [
     [["--mounting", "vertical"], /needs a ground/],
+    [["--ground", "average", "--height-m", "5", "--clearance-m", "1"], /clearance \(--clearance-m\) applies to the vertical mounting only/],
+    [["--ground", "average", "--height-m", "5", "--mounting", "vertical", "--clearance-m", "5"], /must be below the mast height 5 m/],
+    [["--ground", "average", "--height-m", "5", "--mounting", "vertical", "--clearance-m", "x"], /--clearance-m must be a number of metres/],
     [["--ground", "average"], /needs a height/],
     [["--ground", "average", "--height-m", "2", "--objective", "dx"], /--objective must be one of/],
   ] as [string[], RegExp][]) {

@@ -111,7 +111,29 @@ describe("links from catalog entries over ground", () => {
     expect(stateOfEntry(i, 0.5).heightM).toBe("6");
   });
 
-  it("a vertical entry (height = mast top) leaves the height for the visitor, and the form asks for it", () => {
+  it("a vertical entry with its clearance carries the mast top and the clearance, and the link designs from that mast", () => {
+    const i = { ...free, overGround: { groundName: "average", heightM: 10, mounting: "vertical", purpose: "long-distance", verticalClearanceM: 2 } };
+    const s = stateOfEntry(i);
+    expect(s).toMatchObject({ ground: "average", heightM: "10", mounting: "vertical", objective: "long-distance", clearanceM: "2" });
+    const href = customHref("/", s);
+    expect(href).toMatch(/&clearanceM=2$/);
+    const r = requestFromState(stateFromQuery(new URL(href, "http://127.0.0.1").search));
+    expect(r).toMatchObject({ ground: GROUND_PRESETS.average, heightM: 10, mounting: "vertical", verticalClearanceM: 2 });
+    // scaled like every other length
+    expect(stateOfEntry(i, 0.5)).toMatchObject({ heightM: "5", clearanceM: "1" });
+  });
+
+  it("a clearance on a horizontal design, or at the mast top, is refused with the field named", () => {
+    const base = { ...stateOfEntry({ ...free, overGround: { groundName: "average", heightM: 10, mounting: "vertical", purpose: "long-distance", verticalClearanceM: 2 } }) };
+    const fails = (s: typeof base) => { try { requestFromState(s); return ""; } catch (e) { return (e as Error).message; } };
+    const horizontal = fails({ ...base, mounting: "" });
+    expect(horizontal).toBe("design: verticalClearanceM: a clearance (--clearance-m) applies to the vertical mounting only (--mounting vertical)");
+    expect(fieldOfMessage(horizontal)).toBe("clearanceM");
+    expect(fails({ ...base, clearanceM: "10" })).toMatch(/clearance \(--clearance-m\) must be below the mast height 10 m/);
+    expect(fieldOfMessage(fails({ ...base, clearanceM: "-1" }))).toBe("clearanceM");
+  });
+
+  it("a vertical entry without a clearance (height = mast top) leaves the height for the visitor, and the form asks for it", () => {
     const s = stateOfEntry({ ...free, overGround: { groundName: "poor", heightM: 12, mounting: "vertical", purpose: "near-vertical" } });
     expect(s).toMatchObject({ ground: "poor", heightM: "", mounting: "vertical", objective: "near-vertical" });
     expect(() => requestFromState(s)).toThrow("design: heightM: a design over ground needs a height (--height-m)");

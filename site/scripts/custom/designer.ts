@@ -51,6 +51,7 @@ function writeForm(s: FormState): void {
   field("heightM").value = s.heightM;
   setSelect("mounting", s.mounting || "horizontal");
   setSelect("objective", s.objective || "peak");
+  field("clearanceM").value = s.clearanceM;
 }
 
 function readForm(): FormState {
@@ -72,6 +73,7 @@ function readForm(): FormState {
     // the command line's defaults stay out of the URL (an empty field means the default)
     mounting: v("mounting") === "horizontal" ? "" : v("mounting"),
     objective: v("objective") === "peak" ? "" : v("objective"),
+    clearanceM: v("clearanceM"),
   };
 }
 
