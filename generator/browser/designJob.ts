@@ -11,14 +11,15 @@ import { analyzeDesign, DEFAULT_TOLERANCE, type SolveCache } from "../analysis/i
 import { solveAt } from "../analysis/converged.js";
 import { groundCuts, groundFieldOf } from "../analysis/groundFigures.js";
 import { elevationChartSvg } from "../site/overGround.js";
-import { buildEntry } from "../catalog/entryBuild.js";
+import { buildEntry, type EntryParts } from "../catalog/entryBuild.js";
+import { overGroundFigures } from "../catalog/overGroundFigures.js";
 import type { CellRequest, Grid } from "../catalog/grid.js";
 import { canonicalJson, roundSignificant, sha256 } from "../catalog/hash.js";
 import { designBentArm } from "../design/designBentArm.js";
 import { designResult, type DesignResult } from "../design/designResult.js";
 import { shapeOf } from "../design/objective.js";
 import { bandOf, type DesignRequest } from "../design/request.js";
-import { objectiveSolveOptions } from "../design/groundObjective.js";
+import { ELEVATION_WINDOWS_DEG, objectiveSolveOptions } from "../design/groundObjective.js";
 import { groundNameOf } from "./groundName.js";
 import { sha256Listing } from "../export/index.js";
 import { CHECKSUM_FILE } from "../site/downloads.js";
@@ -104,6 +105,38 @@ function noteOf(r: DesignRequest): string {
   return `Designed in the browser for the values in the form, over ${groundNameOf(r.ground)} ground, ${support}, objective ${r.objective ?? "peak"}.`;
 }
 
+/** The height curve of a custom design: its support height this far lower and higher (the catalog grid's offsets). */
+export const CUSTOM_HEIGHT_OFFSETS_M = [-3, 3] as const;
+/** The grounds a custom design is compared over (its own left out). */
+export const CUSTOM_OTHER_GROUNDS = ["poor", "average", "good"] as const;
+
+/**
+ * The entry's over-ground inputs and block, as a catalog cell over ground carries them. heightM is
+ * the support height in the catalog's sense: the wire plane, or for a vertical design the feed at the
+ * mast top (with no clearance given, where the search put the feed above the lowest point). The
+ * height curve keeps to heights the request itself allows (above 5 wire diameters, above the
+ * clearance); figures are null when no shape met the limits.
+ */
+function customOverGround(r: DesignRequest, result: DesignResult, x: number[], analysed: ReturnType<typeof analyzeDesign> | null): EntryParts["overGround"] {
+  const objective = r.objective ?? "peak";
+  const mounting = r.mounting ?? "horizontal";
+  const groundName = groundNameOf(r.ground!);
+  const supportM = mounting === "vertical" && r.verticalClearanceM === undefined ? result.feedHeightM ?? r.heightM! : r.heightM!;
+  const inputs = {
+    groundName,
+    ground: r.ground!,
+    heightM: roundSignificant(supportM, 7),
+    mounting,
+    purpose: objective,
+    elevationWindowDeg: r.elevationWindowDeg ?? ELEVATION_WINDOWS_DEG[objective],
+    ...(r.verticalClearanceM !== undefined ? { verticalClearanceM: r.verticalClearanceM } : {}),
+  };
+  if (!analysed) return { inputs, figures: null };
+  const heightsM = CUSTOM_HEIGHT_OFFSETS_M.map((d) => r.heightM! + d).filter((h) => h >= 5 * r.wireDiameterM && (r.verticalClearanceM === undefined || h > r.verticalClearanceM));
+  const figures = overGroundFigures(x, r, shapeOf(x, r), analysed, { groundName, heightsM, otherGroundNames: CUSTOM_OTHER_GROUNDS });
+  return { inputs, figures };
+}
+
 /** The catalog cell a custom design stands in (a band of its own, named by its edges). */
 function cellOf(r: DesignRequest, band: [number, number]): CellRequest {
   const conductor = typeof r.conductor === "string" ? r.conductor : "copper";
@@ -168,6 +201,7 @@ export async function runDesignJob(request: DesignRequest, post: (m: JobMessage)
     analysis,
     inputHash: sha256(canonicalJson(request)),
     tolerance,
+    ...(request.ground ? { overGround: customOverGround(request, result, outcome.x, analysed) } : {}),
   });
   const ok = isOk(entry) ? entry : null;
   const figures: Figures | null = ok && {

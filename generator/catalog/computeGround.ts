@@ -6,19 +6,17 @@
 // elevation and azimuth cuts, ground loss, the height curve, the other grounds and the free-space
 // figure. Pure: same inputs, same bytes.
 import { analyzeDesign, type Analysis } from "../analysis/index.js";
-import { solveAt } from "../analysis/converged.js";
-import { groundCuts, groundFieldOf } from "../analysis/groundFigures.js";
-import { swr } from "../analysis/swr.js";
 import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
 import { shapeOf } from "../design/objective.js";
 import { parseDesignRequest, type DesignRequest } from "../design/request.js";
 import { groundByName } from "../em/ground.js";
-import { SOLVER_VERSION, type Shape, type Solution } from "../em/index.js";
+import { SOLVER_VERSION, type Shape } from "../em/index.js";
 import { buildEntry, publishedShapeOf } from "./entryBuild.js";
 import type { Entry } from "./entrySchema.js";
 import type { Grid } from "./grid.js";
 import { heightCurveHeightsM, type GroundCellRequest, type OverGroundGrid } from "./gridHf.js";
 import { canonicalJson, sha256 } from "./hash.js";
+import { overGroundFigures } from "./overGroundFigures.js";
 import { GENERATOR_VERSION } from "./versions.js";
 
 export function groundRequest(grid: Grid, cell: GroundCellRequest, over: { heightM?: number; groundName?: string } = {}): DesignRequest {
@@ -57,61 +55,10 @@ export function groundEntryInputHash(grid: Grid, cell: GroundCellRequest): strin
 
 type OverGroundBlock = NonNullable<Entry["overGround"]>;
 
-/** Window gain, takeoff, impedance and SWR of the same x re-mounted (another height or ground). */
-function remounted(x: number[], r: DesignRequest, spw: number, feedGapM: number): { shape: Shape; s: Solution } | null {
-  try {
-    const shape = publishedShapeOf(shapeOf(x, r));
-    return { shape, s: solveAt(shape, shape.frequencyHz, spw, feedGapM, new Map(), r.elevationWindowDeg) };
-  } catch {
-    return null; // a vertical shape that no longer clears the ground at a lower mast
-  }
-}
-
-const shortFigures = (s: Solution, lineOhm: number) => ({
-  gainDbi: s.peakGainDbi,
-  takeoffElevationDeg: 90 - (s.peakDirectionRad.theta * 180) / Math.PI,
-  impedanceOhm: s.inputImpedanceOhm,
-  swr: Number.isFinite(swr(s.inputImpedanceOhm, lineOhm)) ? swr(s.inputImpedanceOhm, lineOhm) : null,
-});
-
+/** The over-ground block of a catalog cell: its height curve and other grounds from the grid. */
 export function overGroundBlock(grid: Grid, cell: GroundCellRequest, x: number[], request: DesignRequest, shape: Shape, a: Analysis): OverGroundBlock {
   const o: OverGroundGrid = grid.overGround!;
-  const spw = a.design.uncertainty.segmentsPerWavelength;
-  const feedGapM = a.design.feedGapM;
-  const s = solveAt(shape, shape.frequencyHz, spw, feedGapM, new Map(), request.elevationWindowDeg);
-  const g = s.ground!;
-  const takeoff = { elevationDeg: g.peakElevationDeg, azimuthDeg: g.peakAzimuthDeg };
-  const cuts = groundCuts(groundFieldOf(shape, s), s.inputPowerW, takeoff);
-  const zs = shape.wires.flatMap((w) => w.pointsM.map((p) => p[2]));
-  const feedPoint = shape.wires[shape.feed.wire].pointsM[shape.feed.vertex];
-  const heightCurve = heightCurveHeightsM(o, cell).flatMap((heightM) => {
-    const m = remounted(x, { ...request, heightM }, spw, feedGapM);
-    return m ? [{ heightM, ...shortFigures(m.s, request.lineImpedanceOhm) }] : [];
-  });
-  const otherGrounds = o.otherGrounds.filter((n) => n !== cell.groundName).flatMap((groundName) => {
-    const m = remounted(x, { ...request, ground: groundByName(groundName, "overGround.otherGrounds") }, spw, feedGapM);
-    return m ? [{ groundName, ...shortFigures(m.s, request.lineImpedanceOhm) }] : [];
-  });
-  const free = publishedShapeOf(shapeOf(x, { ...request, ground: undefined, heightM: undefined, mounting: undefined, elevationWindowDeg: undefined, verticalClearanceM: undefined }));
-  const fs = solveAt(free, free.frequencyHz, spw, feedGapM, new Map());
-  return {
-    mountedPointsM: shape.wires[0].pointsM.map((p) => [p[0], p[1], p[2]] as [number, number, number]),
-    feedHeightM: feedPoint[2],
-    lowestPointM: Math.min(...zs),
-    highestPointM: Math.max(...zs),
-    peakGainDbi: cuts.peakGainDbi,
-    peakElevationDeg: cuts.peakElevationDeg,
-    peakAzimuthDeg: cuts.peakAzimuthDeg,
-    takeoffElevationDeg: takeoff.elevationDeg,
-    takeoffAzimuthDeg: takeoff.azimuthDeg,
-    gainAtElevationDbi: g.gainAtElevationDbi,
-    elevationCut: cuts.elevationCut,
-    azimuthCut: cuts.azimuthCut,
-    groundLossFraction: g.groundLossW === null || request.ground?.type === "perfect" ? null : g.groundLossW / s.inputPowerW,
-    heightCurve,
-    otherGrounds,
-    freeSpace: { gainDbi: fs.peakGainDbi, impedanceOhm: fs.inputImpedanceOhm },
-  };
+  return overGroundFigures(x, request, shape, a, { groundName: cell.groundName, heightsM: heightCurveHeightsM(o, cell), otherGroundNames: o.otherGrounds });
 }
 
 const f1 = (v: number) => v.toFixed(1);

@@ -40,7 +40,8 @@ export function makeEntrySchema(z: Z) {
       /** The support height the cell asks for: the wire plane (horizontal) or the feed at the mast top (vertical). */
       heightM: num,
       mounting: z.enum(["horizontal", "vertical"]),
-      purpose: z.enum(["long-distance", "near-vertical"]),
+      /** The catalog's purposes; "peak" (most gain anywhere, window 0–90°) only in designs made in the designer. */
+      purpose: z.enum(["long-distance", "near-vertical", "peak"]),
       /** Elevation window the purpose plans with, degrees above the horizon (long-distance 5–25, near-vertical 60–90). */
       elevationWindowDeg: z.tuple([num, num]),
       /** Vertical only: no wire point lower than this above the ground (heightM is then the mast top). */

@@ -67,7 +67,7 @@ export interface CompareDesign {
 
 /** The over-ground part a compared design may carry (issue 13). */
 export interface CompareGround {
-  inputs: { overGround?: { heightM: number; mounting: "horizontal" | "vertical"; purpose: "long-distance" | "near-vertical"; groundName: string; elevationWindowDeg: [number, number] } };
+  inputs: { overGround?: { heightM: number; mounting: "horizontal" | "vertical"; purpose: "long-distance" | "near-vertical" | "peak"; groundName: string; elevationWindowDeg: [number, number] } };
   overGround?: { takeoffElevationDeg: number; highestPointM: number; elevationCut: { azimuthDeg: number; stepDeg: number; gainDbi: number[] }; freeSpace: { gainDbi: number } } | null;
 }
 
@@ -115,7 +115,7 @@ function groundCompareRows(designs: readonly (CompareDesign & CompareGround)[]):
   return [
     { label: "Mounting and height", values: pick((g) => `${g.mounting === "horizontal" ? "horizontal" : "vertical, feed on top"} at ${f.trimZeros(f.fixed(g.heightM, 1))} m`) },
     { label: "Highest wire point", values: pick((_, o) => f.metres(o.highestPointM)) },
-    { label: "Purpose (elevation window)", values: pick((g) => `${g.purpose === "long-distance" ? "long distance" : "near-vertical"} (${f.fixed(g.elevationWindowDeg[0], 0)}–${f.fixed(g.elevationWindowDeg[1], 0)}°)`) },
+    { label: "Purpose (elevation window)", values: pick((g) => `${g.purpose === "long-distance" ? "long distance" : g.purpose === "peak" ? "most gain anywhere" : "near-vertical"} (${f.fixed(g.elevationWindowDeg[0], 0)}–${f.fixed(g.elevationWindowDeg[1], 0)}°)`) },
     { label: "Takeoff elevation", values: pick((_, o) => f.degrees(o.takeoffElevationDeg)) },
     { label: "Ground", values: pick((g) => g.groundName) },
     { label: "Same wire in free space", values: pick((_, o) => f.gainDbi(o.freeSpace.gainDbi)) },

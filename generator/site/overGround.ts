@@ -29,6 +29,7 @@ export const MOUNTING_WORDS = {
 export const PURPOSE_WORDS = {
   "long-distance": "long distance (low elevation)",
   "near-vertical": "regional, near-vertical (high elevation)",
+  peak: "most gain in any direction", // designs made in the designer only; the catalog's cells have the other two
 } as const;
 export type Mounting = keyof typeof MOUNTING_WORDS;
 export type Purpose = keyof typeof PURPOSE_WORDS;
