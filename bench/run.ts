@@ -1,7 +1,8 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|parity|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|parity|audit|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
+import { auditCatalog, AUDIT_SIBLING_DB } from "./catalogAudit.js";
 import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchConverged } from "./converged.js";
 import { benchDesignParity, PARITY_DB } from "./designParity.js";
@@ -62,6 +63,21 @@ if (only === "offcentre") { // not in the default run: about 2 CPU minutes
       const g = (v: number | null) => (v === null ? "—" : v.toFixed(3));
       console.log(`${`${c.lengthWl} λ`.padEnd(7)} ${String(c.piecesPerArm).padEnd(2)} ${g(c.centreFedGainDbi).padEnd(15)} ${g(c.gainDbi).padEnd(15)} ${c.status.padEnd(11)} ${String(c.evaluations).padEnd(6)} ${String(c.evaluationsToWithin0p1Db ?? "—").padEnd(17)} ${c.cpuSeconds.toFixed(1).padEnd(7)} ${c.stopReasons.join(", ")}`);
     }
+  }
+}
+
+if (only === "audit") { // not in the default run: reads designs/entries, solves nothing
+  const a = auditCatalog();
+  out.audit = a;
+  if (!json) {
+    const fs = a.freeSpace;
+    console.log(`\ncatalog audit (designs/entries): ${a.entries} entries`);
+    console.log(`free space: ${fs.buildable} of ${fs.cells} cells buildable; direct feed ${fs.directFeedBuildable} of ${fs.directFeedCells} (${fs.offCentre} fed off centre)`);
+    console.log(`over ground: ${a.overGround.buildable} of ${a.overGround.cells} cells buildable`);
+    console.log(`direct feed as built (90th percentile of the bent copies): bare SWR holds ${a.directFeedBareHolds}, holds only after the recommended feed ${a.directFeedHoldsAfterFeed}, neither ${a.directFeedHoldsNeither.length}${a.directFeedHoldsNeither.length ? ` (${a.directFeedHoldsNeither.join(", ")})` : ""}`);
+    console.log(`bands with no direct-feed design: ${a.bandsWithoutDirectFeed.join(", ") || "none"}`);
+    console.log(`${a.underSibling.length} entries more than ${AUDIT_SIBLING_DB} dB under the same cell with one piece fewer per arm${a.underSibling.length ? ":" : ""}`);
+    for (const u of a.underSibling) console.log(`  ${u.id.padEnd(58)} ${u.gainDbi.toFixed(3)} vs ${u.siblingGainDbi.toFixed(3)} dBi (${u.differenceDb.toFixed(3)} dB)`);
   }
 }
 
