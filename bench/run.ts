@@ -1,4 +1,4 @@
-// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|parity|audit|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
+// `npm run bench [-- --json] [-- --only solver|ground|optimizer|offcentre|numpy|parity|audit|analysis|converged|catalog|pipeline|designer|site]`: prints timing tables.
 // Figures, not assertions: tests never time anything.
 import { benchAnalysis } from "./analysis.js";
 import { benchCatalog } from "./catalog.js";
@@ -6,6 +6,7 @@ import { auditCatalog, AUDIT_SIBLING_DB } from "./catalogAudit.js";
 import { benchGround, benchGroundObjective } from "./ground.js";
 import { benchConverged } from "./converged.js";
 import { benchDesignParity, PARITY_DB } from "./designParity.js";
+import { benchNumpyCompare, numpyMissing } from "./numpyCompare.js";
 import { benchOffCentre } from "./offCentre.js";
 import { benchOptimizer } from "./optimizer.js";
 import { benchPipeline } from "./pipeline.js";
@@ -78,6 +79,29 @@ if (only === "audit") { // not in the default run: reads designs/entries, solves
     console.log(`bands with no direct-feed design: ${a.bandsWithoutDirectFeed.join(", ") || "none"}`);
     console.log(`${a.underSibling.length} entries more than ${AUDIT_SIBLING_DB} dB under the same cell with one piece fewer per arm${a.underSibling.length ? ":" : ""}`);
     for (const u of a.underSibling) console.log(`  ${u.id.padEnd(58)} ${u.gainDbi.toFixed(3)} vs ${u.siblingGainDbi.toFixed(3)} dBi (${u.differenceDb.toFixed(3)} dB)`);
+  }
+}
+
+if (only === "numpy") { // not in the default run: needs python3 with numpy and scipy; about 20 CPU s
+  const missing = numpyMissing();
+  if (missing) {
+    if (json) out.numpy = { skipped: missing };
+    else console.log(`numpy comparison skipped: ${missing}`);
+  } else {
+    const c = benchNumpyCompare();
+    out.numpy = c;
+    if (!json) {
+      const { python, numpy, scipy } = c.versions;
+      console.log(`\nnumpy reference (bench/numpyReference.py, python ${python}, numpy ${numpy}, scipy ${scipy}, one BLAS thread): straight wire, 25 segments/λ, unit voltage at the feed; median CPU ms per solve, ${c.rounds} rounds alternating ${c.runs} of ours with ${c.numpyRepetitions} of numpy`);
+      console.log("unknowns  our fill  our LU+solve  numpy fill  numpy LU+solve  ours/numpy | mirror fill+solve  ours/numpy | Z_in ours (Ω)           Z_in numpy (Ω)          rel. diff");
+      const z = (v: { re: number; im: number }) => `${v.re.toFixed(6)} ${v.im >= 0 ? "+" : "−"} j${Math.abs(v.im).toFixed(6)}`;
+      const t = (s: number) => (s * 1e3).toFixed(3);
+      for (const r of c.cases) {
+        console.log(`${String(r.unknowns).padEnd(9)} ${t(r.oursFillS).padEnd(9)} ${t(r.oursLuSolveS).padEnd(13)} ${t(r.numpyFillS).padEnd(11)} ${t(r.numpyLuSolveS).padEnd(15)} ${`${r.ratio.toFixed(3)}×`.padEnd(10)} | ${t(r.oursMirrorS).padEnd(18)} ${`${r.mirrorRatio.toFixed(3)}×`.padEnd(10)} | ${z(r.oursImpedanceOhm).padEnd(23)} ${z(r.numpyImpedanceOhm).padEnd(23)} ${r.relativeDifference.toExponential(1)}`);
+      }
+      const g = c.gap;
+      console.log(`finite gap, solveFeed's mesh (${g.lengthWl} λ, ${g.unknowns} unknowns): solveFeed ${z(g.oursImpedanceOhm)} Ω, numpy ${z(g.numpyImpedanceOhm)} Ω, rel. diff ${g.relativeDifference.toExponential(1)}`);
+    }
   }
 }
 
