@@ -41,7 +41,9 @@ export interface ReferenceResult extends ReferenceKey {
   stopReasons: DesignOutcome["stopReasons"];
   history: DesignOutcome["history"];
   /** Direct-feed keys: the off-centre-fed search in wavelength units (computeOffCentre.ts). */
+  /** Direct feed: the off-centre search from the centre-fed shape, and the one across the whole box. */
   offCentre?: OffCentreReference;
+  offCentreBroad?: OffCentreReference;
 }
 
 export const referenceId = (k: ReferenceKey): string => entryId("ref", k.lengthWl, k.piecesPerArm, k.variant);
@@ -91,7 +93,7 @@ export function computeReference(grid: Grid, k: ReferenceKey, previous: Referenc
     evaluations: outcome.evaluations,
     stopReasons: outcome.stopReasons,
     history: outcome.history,
-    ...(offCentre ? { offCentre } : {}),
+    ...(offCentre ? { offCentre: offCentre.local, offCentreBroad: offCentre.broad } : {}),
   }, 15); // the start point of every band's polish: keep it exact
 }
 
@@ -177,9 +179,11 @@ function designCell(grid: Grid, request: DesignRequest, reference: ReferenceResu
     outcome = { ...outcome, message: infeasibleMessage(outcome, request, reference.status !== "ok", grid.reference.relativeBandwidth) };
   }
   let family: Family;
-  ({ outcome, family } = tryOffCentre(request, outcome, offCentreStarts(reference.offCentre, previous?.offCentre, request.piecesPerArm), margin));
+  ({ outcome, family } = tryOffCentre(request, outcome, offCentreStarts(offCentreOf(reference), previous ? offCentreOf(previous) : [], request.piecesPerArm), margin));
   return { outcome, startedFrom, family };
 }
+
+const offCentreOf = (r: ReferenceResult): OffCentreReference[] => [r.offCentre, r.offCentreBroad].filter((o): o is OffCentreReference => o !== undefined);
 
 // analysed as published (rounded), so the entry reproduces from its own shape file
 const shapeFor = (o: DesignOutcome, r: DesignRequest, family: Family) => publishedShapeOf(family === "off-centre" ? offCentreShapeOf(o.x, r) : shapeOf(o.x, r));

@@ -45,14 +45,19 @@ export interface OffCentreReference {
 
 
 /**
- * The off-centre search in wavelength units for one direct-feed (length, K), with the centre-fed
- * reference's shape (fed in the middle) competing as a start, so it never ends worse than that
- * shape at the same limits; null for max-gain keys.
+ * The off-centre searches in wavelength units for one direct-feed (length, K), both with the
+ * centre-fed reference's shape (fed in the middle) as a start, so neither ends worse than that shape
+ * at the same limits: `local` begins at that shape, `broad` searches the whole box from its centre
+ * (designOffCentre.ts). Both become starts of every band's polish: measured on the catalog
+ * (bentwire-catalog-6, local only), the local search gave 1.5 λ cells up to 1.7 dB more than the broad
+ * one had, while 2 and 2.5 λ cells came up to 2.3 dB under what the broad one's shape gave them.
+ * Null for max-gain keys.
  */
-export function computeOffCentreReference(k: ReferenceKey, request: DesignRequest, centreX?: readonly number[]): OffCentreReference | null {
+export function computeOffCentreReference(k: ReferenceKey, request: DesignRequest, centreX?: readonly number[]): { local: OffCentreReference; broad: OffCentreReference } | null {
   if (k.variant !== "direct-feed") return null;
-  const outcome = designOffCentre(searchRequestOf(request), centreX ? { start: mirrorAsOffCentre(centreX, k.piecesPerArm) } : {});
-  return { status: outcome.status, x: outcome.x, gainDbi: outcome.evaluation.gainDbi, evaluations: outcome.evaluations };
+  const start = centreX ? { start: mirrorAsOffCentre(centreX, k.piecesPerArm) } : {};
+  const of = (o: DesignOutcome): OffCentreReference => ({ status: o.status, x: o.x, gainDbi: o.evaluation.gainDbi, evaluations: o.evaluations });
+  return { local: of(designOffCentre(searchRequestOf(request), start)), broad: of(designOffCentre(searchRequestOf(request), { ...start, broad: true })) };
 }
 
 /**
@@ -87,16 +92,18 @@ export interface OffCentreStart {
 }
 
 /**
- * The off-centre starts of one direct-feed cell: its own off-centre reference and, when the
- * reference with one piece fewer per arm found more gain, that shape with a piece added on each arm
- * (the same wire, so a polish from it cannot end worse than the K − 1 shape at the same limits).
- * Measured on the committed catalog (bentwire-catalog-5): 20 off-centre direct-feed entries came
- * 0.10–0.86 dB under their K − 1 sibling because the K reference search ended in a worse optimum.
+ * The off-centre starts of one direct-feed cell: its own off-centre references and, for each
+ * reference with one piece fewer per arm that found more gain than all of its own, that shape with
+ * a piece added on each arm (the same wire, so a polish from it cannot end worse than the K − 1
+ * shape at the same limits). Measured on the committed catalog (bentwire-catalog-5): 20 off-centre
+ * direct-feed entries came 0.10–0.86 dB under their K − 1 sibling because the K reference search
+ * ended in a worse optimum.
  */
-export function offCentreStarts(own: OffCentreReference | null | undefined, previous: OffCentreReference | null | undefined, piecesPerArm: number): OffCentreStart[] {
-  const starts: OffCentreStart[] = own ? [{ x: own.x, gainDbi: own.gainDbi }] : [];
-  if (previous && previous.gainDbi !== null && (own?.gainDbi == null || previous.gainDbi > own.gainDbi)) {
-    starts.push({ x: addPieceOffCentre(previous.x, piecesPerArm - 1), gainDbi: previous.gainDbi });
+export function offCentreStarts(own: readonly OffCentreReference[], previous: readonly OffCentreReference[], piecesPerArm: number): OffCentreStart[] {
+  const starts: OffCentreStart[] = own.map((o) => ({ x: o.x, gainDbi: o.gainDbi }));
+  const ownBest = Math.max(...own.map((o) => o.gainDbi ?? -Infinity));
+  for (const p of previous) {
+    if (p.gainDbi !== null && p.gainDbi > ownBest) starts.push({ x: addPieceOffCentre(p.x, piecesPerArm - 1), gainDbi: p.gainDbi });
   }
   return starts;
 }

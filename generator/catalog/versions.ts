@@ -4,7 +4,7 @@
 // included): bump it when a change to the band polish, the analysis or the entry layout should make
 // existing entries stale; the references are then reused, so an analysis change recomputes entries
 // only. (The search version keeps the name the references were first hashed under.)
-export const SEARCH_VERSION = "bentwire-catalog-6";
+export const SEARCH_VERSION = "bentwire-catalog-7";
 export const GENERATOR_VERSION = "bentwire-catalog-6";
 // The band polish of the free-space entries (compute.ts, computeOffCentre.ts): part of their input
 // hash only, so a change there recomputes the free-space entries and not those over the ground.

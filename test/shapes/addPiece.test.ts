@@ -46,9 +46,14 @@ describe("off-centre starts of a direct-feed cell", () => {
   const own = { status: "ok" as const, x: [0.3, 0.7, 0.1, 0.5, 0.1, 0.5], gainDbi: 5, evaluations: 1 };
   const previous = { status: "ok" as const, x: [0.3, 0.7], gainDbi: 5.4, evaluations: 1 };
   it("the K − 1 shape competes only when it found more gain", () => {
-    expect(offCentreStarts(own, previous, 2).map((s) => s.gainDbi)).toEqual([5, 5.4]);
-    expect(offCentreStarts(own, { ...previous, gainDbi: 4.9 }, 2).map((s) => s.gainDbi)).toEqual([5]);
-    expect(offCentreStarts(own, null, 2)).toHaveLength(1);
-    expect(offCentreStarts({ ...own, gainDbi: null }, previous, 2).map((s) => s.x.length)).toEqual([6, 6]);
+    expect(offCentreStarts([own], [previous], 2).map((s) => s.gainDbi)).toEqual([5, 5.4]);
+    expect(offCentreStarts([own], [{ ...previous, gainDbi: 4.9 }], 2).map((s) => s.gainDbi)).toEqual([5]);
+    expect(offCentreStarts([own], [], 2)).toHaveLength(1);
+    expect(offCentreStarts([{ ...own, gainDbi: null }], [previous], 2).map((s) => s.x.length)).toEqual([6, 6]);
+  });
+  it("both own searches start a polish; a K − 1 shape only when it beat the better of them", () => {
+    const broad = { ...own, x: [0.2, 0.6, 0.1, 0.4, 0.1, 0.4], gainDbi: 5.6 };
+    expect(offCentreStarts([own, broad], [previous], 2).map((s) => s.gainDbi)).toEqual([5, 5.6]);
+    expect(offCentreStarts([own, broad], [previous, { ...previous, gainDbi: 5.7 }], 2).map((s) => s.gainDbi)).toEqual([5, 5.6, 5.7]);
   });
 });
