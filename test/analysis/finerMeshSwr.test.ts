@@ -53,13 +53,15 @@ describe("finer-mesh SWR check", () => {
 });
 
 // a few committed entries, one per kind of feed where the catalog has them
-const SAMPLE = ["2m-1.5wl-k1-direct-feed", "70cm-1.5wl-k2-direct-feed", "2m-1.5wl-k2-max-gain", "433mhz-2wl-k2-direct-feed"];
+const SAMPLE = ["2m-1.5wl-k1-direct-feed", "70cm-1.5wl-k3-direct-feed", "2m-1.5wl-k2-max-gain", "433mhz-2wl-k2-direct-feed"];
 describe("committed catalog sample: published SWR ≤ limit holds at twice the mesh density", () => {
   for (const id of SAMPLE) {
     const file = `designs/entries/${id}.json`;
     const entry = existsSync(file) ? JSON.parse(readFileSync(file, "utf8")) : null;
     const checkable = entry?.status === "ok" && notPublishedAsMeeting(entry) === null;
-    it.skipIf(!checkable)(id, () => {
+    it(id, () => {
+      // a sample the catalog no longer publishes as meeting the limit checks nothing: pick another
+      expect(checkable, `${id} is not published as meeting its SWR limit`).toBe(true);
       const r = checkEntrySwrOnFinerMesh(entry);
       expect(r.noFinerMesh || r.worstSwr <= entry.feed.toleranceSwr.swrLimit).toBe(true);
       expect(r.ok).toBe(true);
