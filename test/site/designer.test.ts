@@ -337,4 +337,21 @@ describe("designer page over ground", () => {
     expectLocal(w);
     await w.page.close();
   });
+
+  it("a clearance fills its field from the URL; on a horizontal design it shows the CLI's message there and starts nothing", async () => {
+    const w = await watchedPage(browser);
+    await w.page.goto(url({ ...GROUND_CASE, mounting: "vertical", clearanceM: "2" }), { waitUntil: "networkidle" });
+    expect(await w.page.inputValue("input[name=clearanceM]")).toBe("2");
+    await w.page.goto(url({ ...GROUND_CASE, clearanceM: "2", run: "1" }), { waitUntil: "networkidle" });
+    const shown = (await w.page.locator("[data-form-message]").textContent())!;
+    const fromCli = await cli(["design", ...GROUND_FLAGS, "--clearance-m", "2", "--json"]);
+    expect(fromCli.code).toBe(2);
+    expect(shown).toBe("design: verticalClearanceM: a clearance (--clearance-m) applies to the vertical mounting only (--mounting vertical)");
+    expect(fromCli.stderr.trim()).toBe(shown);
+    expect(await w.page.getAttribute("input[name=clearanceM]", "aria-invalid")).toBe("true");
+    expect(await w.page.locator("#design-result").count()).toBe(0);
+    expect(w.requests.filter((u) => /designer-[^/]*\.js$/.test(u)), "worker script fetched").toEqual([]);
+    expectLocal(w);
+    await w.page.close();
+  });
 });
