@@ -9,7 +9,8 @@
 // 1 λ K = 2 5.118 dBi in 3,853 evaluations, K = 3 5.084 in 6,101; 1.5 λ K = 2 4.907 in 3,853, K = 3 4.894 in 6,101.
 import { readFileSync } from "node:fs";
 import { referenceRequest } from "../generator/catalog/compute.js";
-import { designCentreFed, mirrorAsOffCentre, searchRequestOf } from "../generator/catalog/computeOffCentre.js";
+import { designCentreFed, searchRequestOf } from "../generator/catalog/computeOffCentre.js";
+import { mirrorAsOffCentre } from "../generator/shapes/offCentre.js";
 import { parseGrid } from "../generator/catalog/grid.js";
 import { designOffCentre } from "../generator/design/designOffCentre.js";
 

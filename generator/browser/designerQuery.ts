@@ -62,18 +62,24 @@ function groundOf(text: string): Ground | undefined {
   return text.trim() === "" ? undefined : groundByName(text.trim(), "design: ground");
 }
 
+/** Request fields as the schema names them → the query key the form shows them in. */
+const FIELD_KEYS: Record<string, QueryKey> = { frequencyHz: "freqMhz", piecesPerArm: "pieces", wireDiameterM: "wireDiameterMm", bandHz: "bandMhz", verticalClearanceM: "clearanceM" };
+
 /**
  * The field a message is about, so the form can mark it: the request field a schema message starts
- * with ("design: verticalClearanceM: …") when it stands for a query key, else the query key it names first.
+ * with ("design: verticalClearanceM: …"), else the query key it names first, else a request field or
+ * the word "band" anywhere in it.
  */
 export function fieldOfMessage(message: string): QueryKey | null {
-  const path = /^design: (verticalClearanceM): /.exec(message);
-  if (path) return "clearanceM";
-  const aliases: [RegExp, QueryKey][] = [[/\bfrequencyHz\b/, "freqMhz"], [/\bpiecesPerArm\b/, "pieces"], [/\bwireDiameterM\b/, "wireDiameterMm"], [/\bbandHz\b/, "bandMhz"], [/\bband\b/, "bandMhz"], [/\bverticalClearanceM\b/, "clearanceM"]];
+  const keyOf = (name: string): QueryKey | undefined => ((QUERY_KEYS as readonly string[]).includes(name) ? (name as QueryKey) : FIELD_KEYS[name]);
+  const path = /^design: (\w+)(?:\[\d+\])?: /.exec(message);
+  const fromPath = path ? keyOf(path[1]) : undefined;
+  if (fromPath) return fromPath;
   const at = (k: QueryKey) => message.search(new RegExp(`\\b${k}\\b`));
   const named = QUERY_KEYS.filter((k) => at(k) >= 0).sort((a, b) => at(a) - at(b));
   if (named.length) return named[0];
-  return aliases.find(([re]) => re.test(message))?.[1] ?? null;
+  const field = Object.keys(FIELD_KEYS).find((f) => new RegExp(`\\b${f}\\b`).test(message));
+  return field ? FIELD_KEYS[field] : /\bband\b/.test(message) ? "bandMhz" : null;
 }
 
 /** The request a form state asks for; throws InputError with one line naming the field. */

@@ -16,8 +16,6 @@ import { designBentArm, type DesignOutcome } from "../design/designBentArm.js";
 import { designOffCentre } from "../design/designOffCentre.js";
 import type { DesignRequest } from "../design/request.js";
 import { addPieceOffCentre, mirrorAsOffCentre } from "../shapes/offCentre.js";
-
-export { mirrorAsOffCentre };
 import type { ReferenceKey } from "./compute.js";
 
 /** The direct-feed search keeps this fraction of the limit's excess over 1: SWR 2 → 1.8. */

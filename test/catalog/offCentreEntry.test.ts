@@ -5,7 +5,8 @@
 import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, it } from "vitest";
 import { computeEntry, computeReference, referenceRequest, type ReferenceResult } from "../../generator/catalog/compute.js";
-import { mirrorAsOffCentre, SEARCH_SWR_MARGIN, searchSwrLimit } from "../../generator/catalog/computeOffCentre.js";
+import { SEARCH_SWR_MARGIN, searchSwrLimit } from "../../generator/catalog/computeOffCentre.js";
+import { mirrorAsOffCentre } from "../../generator/shapes/offCentre.js";
 import { unpack, wirePointsM } from "../../generator/shapes/bentArm.js";
 import { offCentrePointsM, unpackOffCentre } from "../../generator/shapes/offCentre.js";
 import { entrySchema, type Entry } from "../../generator/catalog/entrySchema.js";
