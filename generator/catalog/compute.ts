@@ -22,7 +22,7 @@ import type { Entry } from "./entrySchema.js";
 import { entryId, type CellRequest, type Grid } from "./grid.js";
 import { canonicalJson, roundDeep, sha256 } from "./hash.js";
 
-import { GENERATOR_VERSION, POLISH_VERSION, SEARCH_VERSION } from "./versions.js";
+import { DIRECT_FEED_VERSION, GENERATOR_VERSION, POLISH_VERSION, SEARCH_VERSION } from "./versions.js";
 import { computeOffCentreReference, designCentreFed, firstHoldingAsBuilt, offCentreStarts, searchPerBand, tryOffCentre, type Family, type OffCentreReference } from "./computeOffCentre.js";
 
 export interface ReferenceKey {
@@ -120,7 +120,7 @@ export function entryInputHash(grid: Grid, cell: CellRequest): string {
     band: cell.band,
     tolerance: grid.tolerance,
     reference: referenceHash(grid, cell),
-    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION, polish: POLISH_VERSION },
+    versions: { solver: SOLVER_VERSION, generator: GENERATOR_VERSION, polish: POLISH_VERSION, ...(cell.variant === "direct-feed" ? { directFeed: DIRECT_FEED_VERSION } : {}) },
   }));
 }
 

@@ -9,3 +9,6 @@ export const GENERATOR_VERSION = "bentwire-catalog-6";
 // The band polish of the free-space entries (compute.ts, computeOffCentre.ts): part of their input
 // hash only, so a change there recomputes the free-space entries and not those over the ground.
 export const POLISH_VERSION = "bentwire-polish-3";
+// The direct-feed band searches (computeOffCentre.ts): part of the free-space direct-feed entries'
+// input hash only, so a change there recomputes those entries and leaves the max-gain ones cached.
+export const DIRECT_FEED_VERSION = "bentwire-direct-feed-2";
